@@ -10,12 +10,14 @@ start_services() {
   export COLLAB_URL="${COLLAB_URL:-ws://127.0.0.1:$COLLAB_PORT}"
   (cd "$ROOT" && exec node --import tsx server/mail-sink.ts) >"$logdir/mail-sink.log" 2>&1 &
   SERVICE_PIDS+=($!)
-  (cd "$ROOT" && exec node --import tsx server/collab.ts) >"$logdir/collab.log" 2>&1 &
-  SERVICE_PIDS+=($!)
+  if [ -f "$ROOT/server/collab.ts" ]; then
+    (cd "$ROOT" && exec node --import tsx server/collab.ts) >"$logdir/collab.log" 2>&1 &
+    SERVICE_PIDS+=($!)
+  fi
   (cd "$ROOT" && exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT") >"$logdir/app.log" 2>&1 &
   SERVICE_PIDS+=($!)
   wait_port "$SMTP_PORT" "mail sink (log: $logdir/mail-sink.log)"
-  wait_port "$COLLAB_PORT" "collaboration server (log: $logdir/collab.log)"
+  [ -f "$ROOT/server/collab.ts" ] && wait_port "$COLLAB_PORT" "collaboration server (log: $logdir/collab.log)"
   wait_port "$APP_PORT" "app (log: $logdir/app.log)"
 }
 

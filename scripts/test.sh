@@ -11,7 +11,8 @@ ensure_debian_packages chromium
 ensure_node_modules
 
 PG_BASE="$(mktemp -d /tmp/joulebook-test-pg.XXXXXX)"; chmod 755 "$PG_BASE"
-ART="$ROOT/artifacts"; rm -rf "$ART/results"; mkdir -p "$ART/results" "$ART/screenshots"
+SUITES="${TEST_SUITES:-unit,integration,e2e}"   # a subset while working, e.g. TEST_SUITES=e2e
+ART="${ARTIFACTS_DIR:-$ROOT/artifacts}"; rm -rf "$ART/results"; mkdir -p "$ART/results" "$ART/screenshots"
 cleanup() { trap - EXIT INT TERM; stop_services; pg_stop "$PG_BASE"; rm -rf "$PG_BASE"; }
 trap cleanup EXIT INT TERM
 
@@ -22,9 +23,15 @@ export TEST_TEMPLATE_DB=joulebook_template
 DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/joulebook_template" node --import tsx scripts/migrate.ts || exit 1
 
 status=0
-log "unit and integration tests"
-node node_modules/vitest/vitest.mjs run --project unit --project integration \
-  --reporter=default --reporter=json --outputFile.json="$ART/results/vitest.json" || status=1
+projects=()
+[[ ",$SUITES," == *,unit,* ]] && projects+=(--project unit)
+[[ ",$SUITES," == *,integration,* ]] && projects+=(--project integration)
+if [ ${#projects[@]} -gt 0 ]; then
+  log "unit and integration tests"
+  node node_modules/vitest/vitest.mjs run "${projects[@]}" \
+    --reporter=default --reporter=json --outputFile.json="$ART/results/vitest.json" || status=1
+fi
+[[ ",$SUITES," == *,e2e,* ]] || { node scripts/summarize-tests.mjs "$ART/results"; exit $(( status || $? )); }
 
 log "browser tests: building the app"
 pg_createdb "$PG_PORT" joulebook_e2e
