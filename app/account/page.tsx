@@ -1,0 +1,34 @@
+import type { Metadata } from "next";
+import { requireUser } from "@/lib/auth/server";
+import { NameForm } from "@/components/account/name-form";
+import { PasswordForm } from "@/components/account/password-form";
+import { SignOutButton } from "@/components/shell/sign-out-button";
+import { UserPage } from "@/components/shell/user-page";
+import { Panel } from "@/components/ui/panel";
+import { PageTitle } from "@/components/ui/page-title";
+
+export const metadata: Metadata = { title: "Account" };
+
+export default async function AccountPage() {
+  const { user } = await requireUser();
+  return (
+    <UserPage>
+      <PageTitle title="Account">
+        <p>
+          Signed in as <span className="font-medium">{user.email}</span>.
+        </p>
+      </PageTitle>
+      <div className="grid max-w-3xl gap-gutter">
+        <Panel title="Your name" description="Shown to colleagues next to your comments, versions and reviews.">
+          <NameForm name={user.name} />
+        </Panel>
+        <Panel title="Password">
+          <PasswordForm />
+        </Panel>
+        <Panel title="Sign out" description="Ends this session in this browser.">
+          <SignOutButton variant="secondary" />
+        </Panel>
+      </div>
+    </UserPage>
+  );
+}

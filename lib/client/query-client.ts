@@ -1,0 +1,14 @@
+import { QueryClient } from "@tanstack/react-query";
+import { ApiError } from "./api";
+
+export function makeQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        staleTime: 15_000,
+        // A 4xx will not fix itself by asking again.
+        retry: (count, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2,
+      },
+    },
+  });
+}
