@@ -1,0 +1,124 @@
+// The onboarding path of issue 2, in a real browser against the built app:
+// sign up → create a workspace → invite a reviewer → the reviewer follows the outbox link,
+// signs up and accepts → sees the workspace and a read-only members page.
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { openPerson, screenshot, type Person } from "./support/browser";
+import { ConsoleWatch } from "./support/console-watch";
+import { fillSignUp, gotoApp, newAccount, pathOf } from "./support/flows";
+
+describe("onboarding: owner invites a reviewer", () => {
+  let owner: Person;
+  let reviewer: Person;
+  let ownerConsole: ConsoleWatch;
+  let reviewerConsole: ConsoleWatch;
+  const ownerAccount = newAccount("Owner");
+  const reviewerAccount = newAccount("Reviewer");
+  const workspaceName = `PHEV concept ${Date.now().toString(36)}`;
+
+  beforeAll(async () => {
+    owner = await openPerson();
+    reviewer = await openPerson();
+    ownerConsole = new ConsoleWatch(owner.page);
+    reviewerConsole = new ConsoleWatch(reviewer.page);
+  });
+  afterAll(async () => {
+    await owner?.close();
+    await reviewer?.close();
+  });
+
+  test("from sign-up to a read-only reviewer", async () => {
+    const page = owner.page;
+
+    // 1. A new person signs up; with no workspace yet they land on "New workspace".
+    await gotoApp(page, "/sign-up");
+    await screenshot(page, "01-sign-up");
+    expect(ownerConsole.take()).toEqual([]);
+    await fillSignUp(page, ownerAccount);
+    await page.waitForURL("**/workspaces/new");
+    await page.getByRole("heading", { level: 1, name: "New workspace" }).waitFor();
+    await screenshot(page, "02-new-workspace");
+    expect(ownerConsole.take()).toEqual([]);
+
+    // 2. They create a workspace and become its owner.
+    await page.getByLabel("Workspace name").fill(workspaceName);
+    await page.getByRole("button", { name: "Create workspace" }).click();
+    await page.waitForURL(/\/w\/[0-9a-f-]{36}$/);
+    const workspacePath = pathOf(page);
+    await page.getByRole("heading", { level: 1, name: workspaceName }).waitFor();
+    expect(await page.locator("main").innerText()).toContain("owner");
+    await screenshot(page, "03-workspace-home-owner");
+    expect(ownerConsole.take()).toEqual([]);
+
+    // 3. On the members page they invite a reviewer by e-mail.
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" }).click();
+    await page.waitForURL(`**${workspacePath}/members`);
+    await page.getByRole("cell", { name: ownerAccount.email }).waitFor();
+    const inviteForm = page.getByRole("form", { name: "Invite a colleague" });
+    await inviteForm.getByLabel("E-mail").fill(reviewerAccount.email);
+    await inviteForm.getByLabel("Role").selectOption("reviewer");
+    await inviteForm.getByRole("button", { name: "Send invitation" }).click();
+    await page.getByText(`Invitation sent to ${reviewerAccount.email}.`).waitFor();
+    await page.getByRole("cell", { name: reviewerAccount.email }).waitFor(); // listed as pending
+    await screenshot(page, "04-members-owner-after-invite");
+    expect(ownerConsole.take()).toEqual([]);
+
+    // 4. The development outbox shows the invitation e-mail with a clickable link.
+    await gotoApp(page, "/dev/outbox");
+    const mail = page.getByRole("article").filter({ hasText: reviewerAccount.email }).first();
+    await mail.waitFor();
+    const href = await mail.locator('a[href*="/invite/"]').first().getAttribute("href");
+    expect(href).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
+    await screenshot(page, "05-outbox");
+    expect(ownerConsole.take()).toEqual([]);
+
+    // 5. The reviewer, in their own browser profile, opens the link: signed out, they are asked
+    //    to sign in or create an account first, and come back to the invitation afterwards.
+    const invitePath = new URL(href!).pathname;
+    const rpage = reviewer.page;
+    await gotoApp(rpage, invitePath);
+    await rpage.getByText("Sign in or create an account first").waitFor();
+    expect(await rpage.locator("main").innerText()).toContain(workspaceName);
+    await screenshot(rpage, "06-invitation-signed-out");
+    expect(reviewerConsole.take()).toEqual([]);
+
+    await rpage.getByRole("link", { name: "Create an account" }).click();
+    await rpage.waitForURL("**/sign-up?**");
+    expect(await rpage.getByLabel("E-mail", { exact: true }).inputValue()).toBe(reviewerAccount.email);
+    await fillSignUp(rpage, reviewerAccount);
+    await rpage.waitForURL(`**${invitePath}`);
+    const accept = rpage.getByRole("button", { name: `Accept and open ${workspaceName}` });
+    await accept.waitFor();
+    await screenshot(rpage, "07-invitation-signed-in");
+    expect(reviewerConsole.take()).toEqual([]);
+
+    // 6. Accepting opens the workspace with the reviewer role.
+    await accept.click();
+    await rpage.waitForURL(`**${workspacePath}`);
+    await rpage.getByRole("heading", { level: 1, name: workspaceName }).waitFor();
+    expect(await rpage.locator("main").innerText()).toContain("reviewer");
+    await screenshot(rpage, "08-workspace-home-reviewer");
+    expect(reviewerConsole.take()).toEqual([]);
+
+    // The workspace switcher works from the keyboard: ArrowDown opens it, Escape closes it.
+    const switcher = rpage.getByRole("button", { name: /Switch workspace/ });
+    await switcher.focus();
+    await rpage.keyboard.press("ArrowDown");
+    const list = rpage.getByRole("list", { name: "Your workspaces" });
+    await list.getByRole("link", { name: "New workspace" }).waitFor();
+    expect(await list.getByRole("link", { name: new RegExp(workspaceName) }).count()).toBe(1);
+    await rpage.keyboard.press("Escape");
+    await list.waitFor({ state: "detached" });
+
+    // 7. The members page is read-only for a reviewer: no invite form, no role selects.
+    await rpage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" }).click();
+    await rpage.waitForURL(`**${workspacePath}/members`);
+    await rpage.getByRole("cell", { name: ownerAccount.email }).waitFor();
+    await rpage.getByRole("cell", { name: reviewerAccount.email }).waitFor();
+    expect(await rpage.getByText(/this list is read-only/).count()).toBe(1);
+    expect(await rpage.getByRole("form", { name: "Invite a colleague" }).count()).toBe(0);
+    expect(await rpage.locator("main select").count()).toBe(0);
+    expect(await rpage.getByRole("button", { name: /^Remove/ }).count()).toBe(0);
+    await screenshot(rpage, "09-members-reviewer-read-only");
+    expect(reviewerConsole.take()).toEqual([]);
+  });
+});
