@@ -89,10 +89,10 @@ export const strategySchema = z.discriminatedUnion("kind", [
     // Parallel-hybrid fixed rule (docs/engine.md). Optional fields fall back to values
     // derived from the battery window at evaluation time.
     kind: z.literal("rule"),
-    electric_speed_max_kmh: nonNegative.default(30),
+    electric_speed_max_kmh: nonNegative.default(50),
     soc_low: fraction.optional(),
     soc_high: fraction.optional(),
-    charge_power_kw: nonNegative.default(5),
+    charge_power_kw: nonNegative.default(1),
   }),
   z.strictObject({
     kind: z.literal("ecms"),

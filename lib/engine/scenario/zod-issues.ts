@@ -20,10 +20,11 @@ function ruleOf(issue: Issue): string {
       return issue.origin === "array" ? `allows at most ${String(issue.maximum)} items` : `must be ${bound(issue, "max")}`;
     case "invalid_value":
       return `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(", ")}`;
-    case "invalid_union":
-      return "discriminator" in issue && issue.options
-        ? `must be one of ${(issue.options as unknown[]).map((v) => JSON.stringify(v)).join(", ")}`
-        : "does not match any allowed form";
+    case "invalid_union": {
+      // zod reports the allowed discriminator values on `options` (not in its public type).
+      const options = (issue as { options?: unknown[] }).options;
+      return options ? `must be one of ${options.map((v) => JSON.stringify(v)).join(", ")}` : "does not match any allowed form";
+    }
     case "unrecognized_keys":
       return `unknown field(s) ${issue.keys.map((k) => `"${k}"`).join(", ")}`;
     case "not_multiple_of":

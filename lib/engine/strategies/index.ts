@@ -1,0 +1,39 @@
+import type { Plant } from "../plants/plant";
+import { SeriesPlant } from "../plants/series";
+import { ParallelPlant } from "../plants/parallel";
+import type { Scenario } from "../scenario/schema";
+import { W_PER_KW } from "../units";
+import type { Strategy } from "./strategy";
+import { FixedStrategy } from "./fixed";
+import { ThermostatStrategy } from "./thermostat";
+import { ParallelRuleStrategy } from "./parallel-rule";
+
+export type { Strategy } from "./strategy";
+
+export type StrategyOutcome = { ok: true; strategy: Strategy } | { ok: false; kind: string; reason: string };
+
+/**
+ * Builds the energy manager named by the scenario. Kinds the schema accepts but this
+ * build does not implement yet ('ecms', 'dp') come back as a clear refusal; issue 4 adds
+ * them here.
+ */
+export function makeStrategy(s: Scenario, plant: Plant): StrategyOutcome {
+  const spec = s.strategy;
+  if (plant.powertrain === "conventional" || plant.powertrain === "bev" || !spec) return { ok: true, strategy: new FixedStrategy(plant) };
+  const b = s.battery!;
+  if (spec.kind === "thermostat" && plant instanceof SeriesPlant)
+    return { ok: true, strategy: new ThermostatStrategy(plant, spec.soc_on, spec.soc_off, spec.on_power_kw * W_PER_KW) };
+  if (spec.kind === "rule" && plant instanceof ParallelPlant) {
+    const span = b.soc_max - b.soc_min;
+    return {
+      ok: true,
+      strategy: new ParallelRuleStrategy(plant, {
+        electricSpeedMax_kmh: spec.electric_speed_max_kmh,
+        socLow: spec.soc_low ?? b.soc_min + 0.3 * span,
+        socHigh: spec.soc_high ?? b.soc_min + 0.7 * span,
+        charge_w: spec.charge_power_kw * W_PER_KW,
+      }),
+    };
+  }
+  return { ok: false, kind: spec.kind, reason: `strategy '${spec.kind}' is not available yet for powertrain '${plant.powertrain}'` };
+}
