@@ -6,7 +6,7 @@ export default function AuthLayout({ children }: { children: ReactNode }) {
   return (
     <div className="flex min-h-screen flex-col items-center px-4 py-section">
       <header className="mb-8 flex flex-col items-center gap-3 text-center">
-        <Wordmark />
+        <Wordmark size={36} />
         <p className="max-w-sm text-sm text-muted">
           Where every joule of a powertrain concept is booked: fuel, electric, and what is lost on the way.
         </p>

@@ -18,10 +18,10 @@ export function LogoMark({ size = 28, className }: { size?: number; className?: 
   );
 }
 
-export function Wordmark({ className }: { className?: string }) {
+export function Wordmark({ className, size = 28 }: { className?: string; size?: number }) {
   return (
     <span className={`inline-flex items-center gap-2 ${className ?? ""}`}>
-      <LogoMark />
+      <LogoMark size={size} />
       <span className="text-lg font-semibold tracking-tight text-ink">Joulebook</span>
     </span>
   );

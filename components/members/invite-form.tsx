@@ -41,7 +41,7 @@ export function InviteForm({ workspaceId }: { workspaceId: string }) {
       <div className="grid gap-4 sm:grid-cols-[1fr_11rem_auto] sm:items-start">
         <TextField label="E-mail" type="email" autoComplete="off" placeholder="colleague@example.com" error={formState.errors.email?.message} {...register("email")} />
         <SelectField label="Role" options={ROLE_OPTIONS} error={formState.errors.role?.message} {...register("role")} />
-        <Button type="submit" disabled={invite.isPending} className="sm:mt-[1.625rem]">
+        <Button type="submit" disabled={invite.isPending} className="sm:mt-[1.625rem] sm:py-2.5">
           {invite.isPending ? "Sending…" : "Send invitation"}
         </Button>
       </div>

@@ -9,6 +9,8 @@ export type MembersTableActions = {
   currentUserId: string;
   canManage: boolean;
   busyUserId?: string;
+  /** Set when exactly one owner is left: that member can be neither removed nor leave. */
+  soleOwnerId?: string;
   changeRole: (member: MemberRow, role: Role) => void;
   askRemove: (member: MemberRow) => void;
 };

@@ -42,9 +42,11 @@ function RoleCell({ member }: { member: MemberRow }) {
 }
 
 function ActionsCell({ member }: { member: MemberRow }) {
-  const { canManage, currentUserId, askRemove, busyUserId } = useMembersTable();
+  const { canManage, currentUserId, askRemove, busyUserId, soleOwnerId } = useMembersTable();
   const self = member.userId === currentUserId;
   if (!canManage && !self) return null;
+  // The last owner cannot leave (the server refuses too); say so instead of offering a dead button.
+  if (member.userId === soleOwnerId) return <span className="text-xs text-muted">last owner</span>;
   return (
     <button
       type="button"

@@ -47,9 +47,12 @@ export function MembersView({ workspaceId, workspaceName, currentUserId, canMana
     },
   });
 
+  const owners = query.data?.members.filter((m) => m.role === "owner") ?? [];
+  const soleOwnerId = owners.length === 1 ? owners[0]!.userId : undefined;
   const actions = useMemo<MembersTableActions>(
     () => ({
       currentUserId,
+      soleOwnerId,
       canManage,
       busyUserId: changeRole.isPending ? changeRole.variables?.member.userId : undefined,
       changeRole: (member, role) => {
@@ -61,7 +64,7 @@ export function MembersView({ workspaceId, workspaceName, currentUserId, canMana
         setRemoving(member);
       },
     }),
-    [currentUserId, canManage, changeRole],
+    [currentUserId, canManage, changeRole, soleOwnerId],
   );
 
   const self = removing?.userId === currentUserId;

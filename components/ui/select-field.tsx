@@ -1,4 +1,5 @@
 "use client";
+import { sentence } from "./sentence";
 import { useId, type ComponentProps } from "react";
 
 type Props = ComponentProps<"select"> & {
@@ -33,7 +34,7 @@ export function SelectField({ label, error, options, className = "", id, ...sele
         ))}
       </select>
       <p id={errorId} role="alert" className="text-sm text-danger empty:hidden">
-        {error ?? ""}
+        {error ? sentence(error) : ""}
       </p>
     </div>
   );

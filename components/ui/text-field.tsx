@@ -1,4 +1,5 @@
 "use client";
+import { sentence } from "./sentence";
 import { useId, type ComponentProps } from "react";
 
 type Props = ComponentProps<"input"> & { label: string; error?: string; hint?: string };
@@ -31,7 +32,7 @@ export function TextField({ label, error, hint, className = "", id, ...input }: 
         </p>
       ) : null}
       <p id={errorId} role="alert" className="min-h-0 text-sm text-danger empty:hidden">
-        {error ?? ""}
+        {error ? sentence(error) : ""}
       </p>
     </div>
   );

@@ -52,13 +52,15 @@ describe("onboarding: owner invites a reviewer", () => {
     // 3. On the members page they invite a reviewer by e-mail.
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" }).click();
     await page.waitForURL(`**${workspacePath}/members`);
-    await page.getByRole("cell", { name: ownerAccount.email }).waitFor();
+    await page.getByRole("cell", { name: ownerAccount.email, exact: true }).waitFor();
+    // The owner gets the controls that a reviewer will not: a role select in the table.
+    expect(await page.getByRole("combobox", { name: `Role of ${ownerAccount.name}` }).count()).toBe(1);
     const inviteForm = page.getByRole("form", { name: "Invite a colleague" });
     await inviteForm.getByLabel("E-mail").fill(reviewerAccount.email);
     await inviteForm.getByLabel("Role").selectOption("reviewer");
     await inviteForm.getByRole("button", { name: "Send invitation" }).click();
     await page.getByText(`Invitation sent to ${reviewerAccount.email}.`).waitFor();
-    await page.getByRole("cell", { name: reviewerAccount.email }).waitFor(); // listed as pending
+    await page.getByRole("cell", { name: reviewerAccount.email, exact: true }).waitFor(); // listed as pending
     await screenshot(page, "04-members-owner-after-invite");
     expect(ownerConsole.take()).toEqual([]);
 
@@ -106,14 +108,15 @@ describe("onboarding: owner invites a reviewer", () => {
     const list = rpage.getByRole("list", { name: "Your workspaces" });
     await list.getByRole("link", { name: "New workspace" }).waitFor();
     expect(await list.getByRole("link", { name: new RegExp(workspaceName) }).count()).toBe(1);
+    await screenshot(rpage, "08b-workspace-switcher-open");
     await rpage.keyboard.press("Escape");
     await list.waitFor({ state: "detached" });
 
     // 7. The members page is read-only for a reviewer: no invite form, no role selects.
     await rpage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" }).click();
     await rpage.waitForURL(`**${workspacePath}/members`);
-    await rpage.getByRole("cell", { name: ownerAccount.email }).waitFor();
-    await rpage.getByRole("cell", { name: reviewerAccount.email }).waitFor();
+    await rpage.getByRole("cell", { name: ownerAccount.email, exact: true }).waitFor();
+    await rpage.getByRole("cell", { name: reviewerAccount.email, exact: true }).waitFor();
     expect(await rpage.getByText(/this list is read-only/).count()).toBe(1);
     expect(await rpage.getByRole("form", { name: "Invite a colleague" }).count()).toBe(0);
     expect(await rpage.locator("main select").count()).toBe(0);
