@@ -2,7 +2,7 @@ import { QUANTITIES, isDimensionless, sameDimension, describeDimension, type Qua
 import { evaluateFormula, identifiers, type Scope, type ScopeValue } from "./formula";
 import { rewriteUnitLiterals } from "./formula-units";
 import { isReservedName } from "./safe-parser";
-import { findUnit, fromSI, mismatchMessage, parseMeasured, unknownUnitMessage, type UnitDef } from "./units";
+import { findUnit, fromSI, mismatchMessage, parseMeasured, toSI, unknownUnitMessage, type UnitDef } from "./units";
 
 export type { Scope, ScopeValue } from "./formula";
 
@@ -80,7 +80,7 @@ export function evaluateValue(text: string, spec: ValueSpec, env: Environment = 
     }
   }
   if (r.pure && !r.readIn) {
-    return finish(r.value_si, r.value_si * fieldUnit.to_si, r.names, spec);
+    return finish(r.value_si, toSI(r.value_si, fieldUnit), r.names, spec);
   }
   if (!sameDimension(r.dim, QUANTITIES[spec.quantity].dim)) {
     return { ok: false, message: `expected ${spec.unit ? `${spec.unit} (${QUANTITIES[spec.quantity].label})` : QUANTITIES[spec.quantity].label}, the formula gives ${describeDimension(r.dim)}`, at: 0 };
@@ -89,7 +89,7 @@ export function evaluateValue(text: string, spec: ValueSpec, env: Environment = 
 }
 
 function finish(value: number, value_si: number, names: string[], spec: ValueSpec): ValueResult {
-  if (!Number.isFinite(value)) return { ok: false, message: "is not a finite number" };
+  if (!Number.isFinite(value)) return { ok: false, message: "is too large: not a finite number (infinite)" };
   if (spec.integer) {
     const rounded = Math.round(value);
     // tolerate float noise from unit conversions, nothing more
@@ -118,7 +118,7 @@ function evaluateQuantityFormula(body: string, bracket: Split["bracket"], env: E
   const unit = findUnit(bracket.text);
   if (!unit || unit.symbol === "") return { ok: false, message: unknownUnitMessage(bracket.text), at: bracket.at };
   const unitDim = QUANTITIES[unit.quantity].dim;
-  if (isDimensionless(r.dim)) return { ok: true, value_si: r.value_si * unit.to_si, dim: unitDim, pure: false, readIn: unit, names: r.names };
+  if (isDimensionless(r.dim)) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, pure: false, readIn: unit, names: r.names };
   if (!sameDimension(r.dim, unitDim)) {
     return { ok: false, message: `the formula gives ${describeDimension(r.dim)}, not ${unit.symbol} (${QUANTITIES[unit.quantity].label})`, at: bracket.at };
   }

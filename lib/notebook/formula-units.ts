@@ -1,4 +1,5 @@
 import { UNITS, type UnitDef } from "./unit-table";
+import { toSI } from "./units";
 
 /**
  * Inside a formula a number may carry a unit ("base_mass + 100 kg", "2 * 25 kW"). expr-eval
@@ -52,7 +53,7 @@ export function rewriteUnitLiterals(text: string): Rewritten {
       const hit = unitAt(text, end + gap);
       if (hit) {
         const name = `_${literals.length}`;
-        literals.push({ name, unit: hit.unit, value_si: Number(num[0]) * hit.unit.to_si });
+        literals.push({ name, unit: hit.unit, value_si: toSI(Number(num[0]), hit.unit) });
         for (const ch of name) { out += ch; origin.push(i); }
         i = end + gap + hit.length;
         continue;

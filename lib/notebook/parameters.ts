@@ -1,7 +1,7 @@
 import { QUANTITIES, describeDimension, sameDimension, type Dimension } from "./dimensions";
 import { evaluateFormula, type ScopeValue } from "./formula";
 import { referencedNames, splitBracketUnit, validParameterName, type Environment } from "./expressions";
-import { findUnit, parseMeasured, unknownUnitMessage } from "./units";
+import { findUnit, parseMeasured, toSI, unknownUnitMessage } from "./units";
 import { isDimensionless } from "./dimensions";
 
 /** One named parameter as written in a Parameters block. */
@@ -44,7 +44,7 @@ export function evaluateParameterText(text: string, scope: Environment["scope"])
   const unit = findUnit(bracket.text);
   if (!unit || unit.symbol === "") return { ok: false, message: unknownUnitMessage(bracket.text), at: bracket.at };
   const unitDim = QUANTITIES[unit.quantity].dim;
-  if (isDimensionless(r.dim)) return { ok: true, value_si: r.value_si * unit.to_si, dim: unitDim, unit: unit.symbol, names: r.names };
+  if (isDimensionless(r.dim)) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, unit: unit.symbol, names: r.names };
   if (!sameDimension(r.dim, unitDim)) {
     return { ok: false, message: `the formula gives ${describeDimension(r.dim)}, not ${unit.symbol}`, at: bracket.at };
   }

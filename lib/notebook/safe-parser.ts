@@ -63,6 +63,11 @@ export function safeParser(): Parser {
     ["min", Math.min], ["max", Math.max], ["pow", Math.pow], ["atan2", Math.atan2], ["hypot", Math.hypot],
   ]);
   p.consts = nullProto<number>([["PI", Math.PI], ["E", Math.E]]);
+  // expr-eval looks names up with `in`: on plain objects "toString" or "hasOwnProperty" would be
+  // found on Object.prototype and parsed as operators, so every table is null-prototype.
+  const binary = (p as unknown as { binaryOps: Record<string, (a: number, b: number) => number> }).binaryOps;
+  (p as unknown as { binaryOps: object }).binaryOps = nullProto(["+", "-", "*", "/", "^"].map((op) => [op, binary[op]]));
+  (p as unknown as { ternaryOps: object }).ternaryOps = nullProto([]);
   shared = p;
   return p;
 }

@@ -41,11 +41,11 @@ export function unknownUnitMessage(text: string): string {
 }
 
 export function toSI(value: number, unit: UnitDef): number {
-  return value * unit.to_si;
+  return unit.per === undefined ? value * unit.to_si : (value * unit.to_si) / unit.per;
 }
 
 export function fromSI(value_si: number, unit: UnitDef): number {
-  return value_si / unit.to_si;
+  return unit.per === undefined ? value_si / unit.to_si : (value_si * unit.per) / unit.to_si;
 }
 
 /** "expected Ah (charge), got kWh (energy)" */
