@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { openPerson, screenshot, type Person } from "./support/browser";
 import { ConsoleWatch } from "./support/console-watch";
 import { fillSignUp, gotoApp, newAccount, pathOf } from "./support/flows";
+import { linkFromOutbox } from "./support/outbox";
 
 describe("onboarding: owner invites a reviewer", () => {
   let owner: Person;
@@ -65,17 +66,14 @@ describe("onboarding: owner invites a reviewer", () => {
     expect(ownerConsole.take()).toEqual([]);
 
     // 4. The development outbox shows the invitation e-mail with a clickable link.
-    await gotoApp(page, "/dev/outbox");
-    const mail = page.getByRole("article").filter({ hasText: reviewerAccount.email }).first();
-    await mail.waitFor();
-    const href = await mail.locator('a[href*="/invite/"]').first().getAttribute("href");
+    const href = await linkFromOutbox(page, reviewerAccount.email, "/invite/");
     expect(href).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
     await screenshot(page, "05-outbox");
     expect(ownerConsole.take()).toEqual([]);
 
     // 5. The reviewer, in their own browser profile, opens the link: signed out, they are asked
     //    to sign in or create an account first, and come back to the invitation afterwards.
-    const invitePath = new URL(href!).pathname;
+    const invitePath = new URL(href).pathname;
     const rpage = reviewer.page;
     await gotoApp(rpage, invitePath);
     await rpage.getByText("Sign in or create an account first").waitFor();
@@ -88,6 +86,16 @@ describe("onboarding: owner invites a reviewer", () => {
     expect(await rpage.getByLabel("E-mail", { exact: true }).inputValue()).toBe(reviewerAccount.email);
     await fillSignUp(rpage, reviewerAccount);
     await rpage.waitForURL(`**${invitePath}`);
+
+    // Before accepting they are not a member: the workspace answers "not found", revealing nothing.
+    const before = await rpage.goto(new URL(workspacePath, rpage.url()).href);
+    expect(before?.status()).toBe(404);
+    await rpage.getByRole("heading", { name: "Nothing here" }).waitFor();
+    expect(await rpage.locator("body").innerText()).not.toContain(workspaceName);
+    await screenshot(rpage, "06b-workspace-not-member");
+    expect(reviewerConsole.take().filter((e) => !e.includes("status of 404"))).toEqual([]);
+    await gotoApp(rpage, invitePath);
+
     const accept = rpage.getByRole("button", { name: `Accept and open ${workspaceName}` });
     await accept.waitFor();
     await screenshot(rpage, "07-invitation-signed-in");
@@ -122,6 +130,17 @@ describe("onboarding: owner invites a reviewer", () => {
     expect(await rpage.locator("main select").count()).toBe(0);
     expect(await rpage.getByRole("button", { name: /^Remove/ }).count()).toBe(0);
     await screenshot(rpage, "09-members-reviewer-read-only");
+    expect(reviewerConsole.take()).toEqual([]);
+
+    // 8. The account page: a name change shows up in the header.
+    await rpage.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Account" }).click();
+    await rpage.waitForURL("**/account");
+    const renamed = `${reviewerAccount.name} (chassis)`;
+    await rpage.getByLabel("Name", { exact: true }).fill(renamed);
+    await rpage.getByRole("button", { name: "Save name" }).click();
+    await rpage.getByText("Name saved.").waitFor();
+    await rpage.getByRole("banner").getByText(renamed).waitFor();
+    await screenshot(rpage, "10-account");
     expect(reviewerConsole.take()).toEqual([]);
   });
 });
