@@ -126,5 +126,8 @@ export function fieldActive(field: FieldDef, params: Readonly<Record<string, str
 /** "Battery pack › capacity" */
 export function fieldLabel(kind: BlockKind, key: string): string {
   const f = fieldOf(kind, key);
-  return `${BLOCK_TITLES[kind]} › ${f ? f.label.toLowerCase() : key}`;
+  const label = f ? f.label : key;
+  // "Initial SOC" → "initial SOC", but "CO2 per litre" stays
+  const lower = /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() + label.slice(1) : label;
+  return `${BLOCK_TITLES[kind]} › ${lower}`;
 }
