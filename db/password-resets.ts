@@ -1,4 +1,4 @@
-import { and, eq, gt, isNull } from "drizzle-orm";
+import { and, count, eq, gt, gte, isNull } from "drizzle-orm";
 import { getDb, type Tx } from "./pool";
 import { passwordResetTokens } from "./schema";
 
@@ -30,4 +30,12 @@ export async function expireUserPasswordResetTokens(args: { userId: string; tx: 
     .update(passwordResetTokens)
     .set({ usedAt: new Date() })
     .where(and(eq(passwordResetTokens.userId, args.userId), isNull(passwordResetTokens.usedAt)));
+}
+
+export async function countResetTokensSince(args: { userId: string; since: Date }): Promise<number> {
+  const rows = await getDb()
+    .select({ n: count() })
+    .from(passwordResetTokens)
+    .where(and(eq(passwordResetTokens.userId, args.userId), gte(passwordResetTokens.createdAt, args.since)));
+  return rows[0]?.n ?? 0;
 }

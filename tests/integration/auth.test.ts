@@ -75,6 +75,14 @@ describe("sign-in and sign-out", () => {
     expect((await bodyOf(me)).user.id).toBe(u.id);
   });
 
+  it("signing in again ends the session the browser already had", async () => {
+    const u = await newUser("again");
+    const res = await call(signInRoute.POST, "POST", "/api/auth/sign-in", { body: { email: u.email, password: PASSWORD }, cookie: u.cookie });
+    expect(res.status).toBe(200);
+    expect((await call(meRoute.GET, "GET", "/api/me", { cookie: u.cookie })).status).toBe(401);
+    expect((await call(meRoute.GET, "GET", "/api/me", { cookie: sessionCookie(res) })).status).toBe(200);
+  });
+
   it("answers a wrong password and an unknown account the same way (401)", async () => {
     const u = await newUser("wrong");
     const a = await signIn(u.email, "not the password");

@@ -96,6 +96,13 @@ describe("password reset", () => {
     expect((await confirm(first, "some other passphrase")).status).toBe(410);
   });
 
+  it("sends at most 3 links per account in 15 minutes, still answering 202", async () => {
+    const u = await newUser("flood");
+    const mailsTo = async () => (await listOutboxMessages({ limit: 1000 })).filter((m) => m.to === u.email).length;
+    for (let i = 0; i < 5; i++) expect((await requestReset(u.email)).status).toBe(202);
+    expect(await mailsTo()).toBe(3);
+  });
+
   it("answers 202 for an unknown address and sends nothing", async () => {
     const before = (await listOutboxMessages({ limit: 1000 })).length;
     const res = await requestReset("nobody-at-all@example.com");
