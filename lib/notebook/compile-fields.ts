@@ -23,6 +23,8 @@ export interface FieldContext {
   sources: SourceTable;
   /** scenario paths whose field failed, so engine errors about them are not repeated */
   failed: Set<string>;
+  /** evaluated values in the Scenario's unit, per block and field (for display beside the text) */
+  values: Map<string, Record<string, unknown>>;
 }
 
 function fieldValue(f: FieldDef, text: string, block: BlockSnapshot, ctx: FieldContext): { ok: true; value: unknown } | { ok: false } {
@@ -68,8 +70,12 @@ export function compileFields(block: BlockSnapshot, target: Record<string, unkno
     if (!path) continue;
     ctx.sources.set(pathKey(path), { blockId: block.id, kind: block.kind, field: f.key });
     const r = fieldValue(f, text, block, ctx);
-    if (r.ok) setPath(target, path, r.value);
-    else ctx.failed.add(pathKey(path));
+    if (r.ok) {
+      setPath(target, path, r.value);
+      const mine = ctx.values.get(block.id) ?? {};
+      mine[f.key] = r.value;
+      ctx.values.set(block.id, mine);
+    } else ctx.failed.add(pathKey(path));
   }
   warnUnknownFields(block, ctx.messages);
 }

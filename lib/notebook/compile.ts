@@ -27,6 +27,8 @@ export interface CompileResult {
   sources: SourceTable;
   /** every parameter's outcome, by name (for showing values next to the Parameters block) */
   parameters: Map<string, ParameterResult>;
+  /** blockId → field key → compiled value in the Scenario's unit (number, number[] or choice) */
+  values: Map<string, Record<string, unknown>>;
 }
 
 const SECTION_OF: Partial<Record<BlockKind, string>> = Object.fromEntries(
@@ -90,11 +92,12 @@ export function compile(input: CompileInput): CompileResult {
   const messages: CompileMessage[] = [];
   const sources: SourceTable = new Map();
   const failed = new Set<string>();
+  const values = new Map<string, Record<string, unknown>>();
   const params = compileParameters(input.blocks, messages);
   const pt = input.powertrain;
   if (!pt || !POWERTRAINS.includes(pt)) {
     messages.push({ severity: "error", text: `choose a powertrain (${POWERTRAINS.join(", ")})` });
-    return { messages, sources, parameters: params.results };
+    return { messages, sources, parameters: params.results, values };
   }
   const chosen = pickComponents(input.blocks, messages);
   for (const kind of REQUIRED_KINDS[pt]) {
@@ -104,7 +107,7 @@ export function compile(input: CompileInput): CompileResult {
     }
   }
   const scenario: Record<string, unknown> = { format: SCENARIO_FORMAT, name: input.name.trim() || "Untitled scenario", powertrain: pt };
-  const ctx: FieldContext = { env: params.env, messages, sources, failed };
+  const ctx: FieldContext = { env: params.env, messages, sources, failed, values };
   for (const [kind, block] of chosen) {
     if (!REQUIRED_KINDS[pt].includes(kind)) {
       messages.push({ blockId: block.id, severity: "warning", text: `${BLOCK_TITLES[kind]}: not used by the ${POWERTRAIN_LABELS[pt]}` });
@@ -117,7 +120,7 @@ export function compile(input: CompileInput): CompileResult {
   const checked = validateWithEngine(scenario, sources, blockOfKind, failed);
   if (!checked.ok) messages.push(...checked.messages);
   const hasError = messages.some((m) => m.severity === "error");
-  return { scenario: hasError || !checked.ok ? undefined : checked.scenario, messages, sources, parameters: params.results };
+  return { scenario: hasError || !checked.ok ? undefined : checked.scenario, messages, sources, parameters: params.results, values };
 }
 
 function compileSection(kind: BlockKind, block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, pt: PowertrainKind): void {

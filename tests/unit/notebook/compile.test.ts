@@ -170,6 +170,9 @@ describe("messages attach to block and field", () => {
     const r = compile(readDoc(doc));
     expect(r.sources.get("battery.capacity_ah")).toEqual({ blockId: idOf(doc, "battery_pack"), kind: "battery_pack", field: "capacity" });
     expect(r.sources.get("engine.max_torque_nm.torque_nm")?.field).toBe("full_load_torques");
+    // series template: curb_mass 1650 kg + payload 80 kg
+    expect(r.values.get(idOf(doc, "body"))?.mass).toBe(1730);
+    expect(r.values.get(idOf(doc, "battery_pack"))?.ocv_voltage).toEqual([320, 360, 400]);
   });
 });
 
