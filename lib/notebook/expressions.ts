@@ -59,6 +59,8 @@ export function evaluateValue(text: string, spec: ValueSpec, env: Environment = 
   const fieldUnit = unitOf(spec);
   if (text.trim() === "") return { ok: false, message: "is empty", at: 0 };
   const { body, bracket } = splitBracketUnit(text);
+  const comma = /^\s*[-+]?\d+,\d+\s*[^\s\d,]*\s*$/.exec(body);
+  if (comma) return { ok: false, message: "write decimals with a point (1.5, not 1,5); commas separate list items", at: body.indexOf(",") };
   if (!bracket) {
     const lit = parseMeasured(body, fieldUnit);
     if (lit.ok) {

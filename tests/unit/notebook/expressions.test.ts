@@ -53,6 +53,9 @@ describe("literal values", () => {
   it("energy is not torque, though both are N·m in SI", () => {
     expect(bad("15 kWh", torque).message).toContain("got kWh (energy)");
   });
+  it("a decimal comma is explained", () => {
+    expect(bad("1,5 t", mass)).toMatchObject({ message: expect.stringContaining("decimals with a point"), at: 1 });
+  });
   it("an empty text is an error", () => {
     expect(bad("  ", mass).message).toBe("is empty");
   });
