@@ -14,15 +14,26 @@ import { MembersTable } from "./members-table";
 import { PendingInvitations } from "./pending-invitations";
 import type { MemberRow, MembersResponse } from "./types";
 
-type Props = { workspaceId: string; workspaceName: string; currentUserId: string; canManage: boolean; readOnlyReason: string };
+type Props = {
+  workspaceId: string;
+  workspaceName: string;
+  currentUserId: string;
+  canManage: boolean;
+  readOnlyReason: string;
+  initialData?: MembersResponse;
+};
 
-export function MembersView({ workspaceId, workspaceName, currentUserId, canManage, readOnlyReason }: Props) {
+export function MembersView({ workspaceId, workspaceName, currentUserId, canManage, readOnlyReason, initialData }: Props) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [error, setError] = useState<string>();
   const [removing, setRemoving] = useState<MemberRow>();
   const key = queryKeys.members(workspaceId);
-  const query = useQuery({ queryKey: key, queryFn: () => api<MembersResponse>(`/api/workspaces/${workspaceId}/members`) });
+  const query = useQuery({
+    queryKey: key,
+    queryFn: () => api<MembersResponse>(`/api/workspaces/${workspaceId}/members`),
+    initialData,
+  });
 
   const changeRole = useMutation({
     mutationFn: ({ member, role }: { member: MemberRow; role: Role }) =>
@@ -105,16 +116,12 @@ export function MembersView({ workspaceId, workspaceName, currentUserId, canMana
       >
         {self
           ? "You lose access to its scenarios, versions and reviews until an owner invites you again."
-          : `${removing?.name ?? "They"} (${removing?.email ?? ""}) loses access to this workspace. Their comments and versions stay.`}
+          : `${removing?.name ?? "They"} (${removing?.email ?? ""}) loses access to this workspace until invited again.`}
       </ConfirmDialog>
     </div>
   );
 }
 
 function messageOf(error: unknown): string {
-  return error instanceof ApiError ? capitalise(error.message) : "Something went wrong. Try again.";
-}
-
-function capitalise(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
+  return error instanceof ApiError ? error.message : "Something went wrong. Try again.";
 }

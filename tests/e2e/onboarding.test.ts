@@ -142,5 +142,30 @@ describe("onboarding: owner invites a reviewer", () => {
     await rpage.getByRole("banner").getByText(renamed).waitFor();
     await screenshot(rpage, "10-account");
     expect(reviewerConsole.take()).toEqual([]);
+
+    // 9. Back with the owner: change the reviewer's role, then remove them (with confirmation).
+    const renamedCell = (p: typeof page) => p.getByRole("cell", { name: renamed, exact: true });
+    await gotoApp(page, `${workspacePath}/members`);
+    await renamedCell(page).waitFor();
+    const roleSelect = page.getByRole("combobox", { name: `Role of ${renamed}` });
+    expect(await roleSelect.inputValue()).toBe("reviewer");
+    const patched = page.waitForResponse((r) => r.request().method() === "PATCH" && r.url().includes("/members/"));
+    await roleSelect.selectOption("viewer");
+    expect((await patched).status()).toBe(200);
+    await page.reload({ waitUntil: "networkidle" });
+    expect(await page.getByRole("combobox", { name: `Role of ${renamed}` }).inputValue()).toBe("viewer");
+
+    await page.getByRole("button", { name: `Remove ${renamed}` }).click();
+    const dialog = page.getByRole("dialog", { name: `Remove ${renamed}?` });
+    await dialog.waitFor();
+    await screenshot(page, "11-remove-confirmation");
+    await dialog.getByRole("button", { name: "Remove member" }).click();
+    await renamedCell(page).waitFor({ state: "detached" });
+    expect(await page.getByRole("cell", { name: ownerAccount.email, exact: true }).count()).toBe(1);
+    expect(ownerConsole.take()).toEqual([]);
+
+    // The removed reviewer no longer gets in.
+    const after = await rpage.goto(new URL(workspacePath, rpage.url()).href);
+    expect(after?.status()).toBe(404);
   });
 });
