@@ -3,6 +3,7 @@ import type { Driveline, Vehicle } from "./scenario/schema";
 import { roadLoadPowers, type RoadLoadParams, type RoadLoadPowers } from "./models/road-load";
 import { scheduledGear } from "./models/gear-schedule";
 import { msToKmh } from "./units";
+import { f64Views } from "./buffers";
 
 /**
  * Everything about a step that does not depend on the powertrain's control, computed once
@@ -49,12 +50,11 @@ export function computeDemand(cycle: Cycle, vehicle: Vehicle, driveline: Driveli
   const n = v.length - 1;
   const dt = cycle.dt_s;
   const p = roadLoadParams(vehicle);
+  const [time_s, speed_m_s, accel_m_s2, aero_w, rolling_w, grade_w, inertia_w, wheel_w, shaft_rad_s, shaft_w] = f64Views(n, 10);
+  const bytes = new Uint8Array(2 * n);
   const d: Demand = {
-    n, dt_s: dt,
-    time_s: new Float64Array(n), speed_m_s: new Float64Array(n), accel_m_s2: new Float64Array(n),
-    moving: new Uint8Array(n), aero_w: new Float64Array(n), rolling_w: new Float64Array(n),
-    grade_w: new Float64Array(n), inertia_w: new Float64Array(n), wheel_w: new Float64Array(n),
-    gear: new Uint8Array(n), shaft_rad_s: new Float64Array(n), shaft_w: new Float64Array(n),
+    n, dt_s: dt, time_s, speed_m_s, accel_m_s2, moving: bytes.subarray(0, n), aero_w, rolling_w, grade_w,
+    inertia_w, wheel_w, gear: bytes.subarray(n), shaft_rad_s, shaft_w,
     driveline_efficiency: driveline.efficiency, distance_m: 0,
   };
   const rl: RoadLoadPowers = { aero_w: 0, rolling_w: 0, grade_w: 0, inertia_w: 0 };

@@ -13,10 +13,22 @@ import { G_PER_KG, J_PER_KWH, radSToRpm } from "./units";
 
 export type EvaluateOutcome = { ok: true; result: Result } | { ok: false; errors: ScenarioError[] };
 
-function toArray(a: ArrayLike<number>, scale = 1): number[] {
+function toArray(a: Float64Array, scale = 1): number[] {
   const out = new Array<number>(a.length);
   for (let i = 0; i < a.length; i++) out[i] = a[i] * scale;
   return out;
+}
+
+function bytesToArray(a: Uint8Array): number[] {
+  const out = new Array<number>(a.length);
+  for (let i = 0; i < a.length; i++) out[i] = a[i];
+  return out;
+}
+
+/** Scales a run trace in place (it belongs to this evaluation only). */
+function scaled(a: number[], scale: number): number[] {
+  if (scale !== 1) for (let i = 0; i < a.length; i++) a[i] *= scale;
+  return a;
 }
 
 function traces(d: Demand, run: Run, lhv_j_per_g: number): Traces {
@@ -24,24 +36,24 @@ function traces(d: Demand, run: Run, lhv_j_per_g: number): Traces {
   return {
     time_s: toArray(d.time_s),
     speed_kmh: toArray(d.speed_m_s, 3.6),
-    gear: toArray(d.gear),
+    gear: bytesToArray(d.gear),
     wheel_power_w: toArray(d.wheel_w),
-    brake_power_w: toArray(t.brake_power_w),
-    engine_on: toArray(t.engine_on),
-    engine_power_w: toArray(t.engine_power_w),
-    engine_speed_rpm: toArray(t.engine_speed_rad_s, radSToRpm(1)),
-    engine_torque_nm: toArray(t.engine_torque_nm),
-    motor_power_w: toArray(t.motor_power_w),
-    motor_torque_nm: toArray(t.motor_torque_nm),
-    generator_power_w: toArray(t.generator_power_w),
-    battery_power_w: toArray(t.battery_power_w),
-    battery_current_a: toArray(t.battery_current_a),
-    soc: toArray(t.soc),
-    fuel_rate_g_s: toArray(t.fuel_w, lhv_j_per_g > 0 ? 1 / lhv_j_per_g : 0),
+    brake_power_w: t.brake_power_w,
+    engine_on: t.engine_on,
+    engine_power_w: t.engine_power_w,
+    engine_speed_rpm: scaled(t.engine_speed_rad_s, radSToRpm(1)),
+    engine_torque_nm: t.engine_torque_nm,
+    motor_power_w: t.motor_power_w,
+    motor_torque_nm: t.motor_torque_nm,
+    generator_power_w: t.generator_power_w,
+    battery_power_w: t.battery_power_w,
+    battery_current_a: t.battery_current_a,
+    soc: t.soc,
+    fuel_rate_g_s: scaled(t.fuel_w, lhv_j_per_g > 0 ? 1 / lhv_j_per_g : 0),
   };
 }
 
-function maxAbs(a: Float64Array): number {
+function maxAbs(a: readonly number[]): number {
   let m = 0;
   for (let i = 0; i < a.length; i++) if (Math.abs(a[i]) > m) m = Math.abs(a[i]);
   return m;

@@ -90,7 +90,7 @@ export function chargeSustainingWarning(s: Scenario, l: Ledger, socInitial: numb
 }
 
 /** SOC within 1 % of the window from a bound for more than 10 % of the steps (common practice, no source). */
-export function socPinnedWarnings(s: Scenario, soc: Float64Array, socFinal: number): Finding[] {
+export function socPinnedWarnings(s: Scenario, soc: readonly number[], socFinal: number): Finding[] {
   const b = s.battery;
   if (!b || soc.length === 0) return [];
   const tol = 0.01 * (b.soc_max - b.soc_min);

@@ -2,6 +2,7 @@ import type { Plant } from "./plants/plant";
 import type { Strategy } from "./strategies/strategy";
 import type { Ledger } from "./ledger";
 import { EpisodeTracker } from "./episodes";
+import { zeros } from "./buffers";
 import {
   S_AUX_W, S_BATT_CURRENT_A, S_BATT_OCV_V, S_BATT_TERMINAL_W, S_BATTERY_LOSS_W, S_BRAKES_W, S_CLUTCH_W,
   S_DRIVELINE_W, S_ENGINE_LOSS_W, S_ENGINE_ON, S_ENGINE_POWER_W, S_ENGINE_SPEED_RAD_S, S_ENGINE_TORQUE_NM,
@@ -11,18 +12,18 @@ import {
 
 /** Per-step series recorded by a run (SI; converted for the Result in result.ts). */
 export interface RunTraces {
-  engine_on: Uint8Array;
-  engine_power_w: Float64Array;
-  engine_speed_rad_s: Float64Array;
-  engine_torque_nm: Float64Array;
-  motor_power_w: Float64Array;
-  motor_torque_nm: Float64Array;
-  generator_power_w: Float64Array;
-  battery_power_w: Float64Array;
-  battery_current_a: Float64Array;
-  brake_power_w: Float64Array;
-  soc: Float64Array; // at the start of each step
-  fuel_w: Float64Array;
+  engine_on: number[];
+  engine_power_w: number[];
+  engine_speed_rad_s: number[];
+  engine_torque_nm: number[];
+  motor_power_w: number[];
+  motor_torque_nm: number[];
+  generator_power_w: number[];
+  battery_power_w: number[];
+  battery_current_a: number[];
+  brake_power_w: number[];
+  soc: number[]; // at the start of each step
+  fuel_w: number[];
 }
 
 export interface Run {
@@ -35,12 +36,12 @@ export interface Run {
   engineStarts: number;
 }
 
+/** Plain arrays: they go into the Result as they are, with no copy. */
 function allocTraces(n: number): RunTraces {
   return {
-    engine_on: new Uint8Array(n), engine_power_w: new Float64Array(n), engine_speed_rad_s: new Float64Array(n),
-    engine_torque_nm: new Float64Array(n), motor_power_w: new Float64Array(n), motor_torque_nm: new Float64Array(n),
-    generator_power_w: new Float64Array(n), battery_power_w: new Float64Array(n), battery_current_a: new Float64Array(n),
-    brake_power_w: new Float64Array(n), soc: new Float64Array(n), fuel_w: new Float64Array(n),
+    engine_on: zeros(n), engine_power_w: zeros(n), engine_speed_rad_s: zeros(n), engine_torque_nm: zeros(n),
+    motor_power_w: zeros(n), motor_torque_nm: zeros(n), generator_power_w: zeros(n), battery_power_w: zeros(n),
+    battery_current_a: zeros(n), brake_power_w: zeros(n), soc: zeros(n), fuel_w: zeros(n),
   };
 }
 

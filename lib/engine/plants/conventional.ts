@@ -1,6 +1,7 @@
 import type { Demand } from "../demand";
 import type { WillansEngine } from "../models/willans-engine";
 import { S_AUX_W, S_BRAKES_W, S_CLUTCH_W, clearStep } from "../step-output";
+import { f64Views } from "../buffers";
 import { MODE_ENGINE_ON, type Plant } from "./plant";
 import { bookBraking, bookTractionDriveline, noBattery, runEngine } from "./common";
 
@@ -21,8 +22,7 @@ export class ConventionalPlant implements Plant {
 
   constructor(readonly demand: Demand, readonly engine: WillansEngine, readonly aux_w: number) {
     const n = demand.n;
-    this.engineSpeed = new Float64Array(n);
-    this.fullLoad = new Float64Array(n);
+    [this.engineSpeed, this.fullLoad] = f64Views(n, 2);
     for (let k = 0; k < n; k++) {
       const w = Math.max(demand.shaft_rad_s[k], engine.idle_rad_s);
       this.engineSpeed[k] = w;

@@ -3,6 +3,7 @@ import type { Battery } from "../models/battery";
 import type { ElectricMachine } from "../models/electric-machine";
 import type { WillansEngine } from "../models/willans-engine";
 import { S_AUX_W, S_CLUTCH_W, V_MOTOR_SPEED, V_MOTOR_TORQUE, clearStep, violate } from "../step-output";
+import { f64Views } from "../buffers";
 import { MODE_ENGINE_OFF, MODE_ENGINE_ON, type Plant } from "./plant";
 import { bookTractionDriveline, finishBattery, motorAt, motorDrive, regenerate, runEngine } from "./common";
 
@@ -25,10 +26,7 @@ export class ParallelPlant implements Plant {
 
   constructor(readonly demand: Demand, readonly engine: WillansEngine, readonly motor: ElectricMachine, readonly battery: Battery, readonly aux_w: number) {
     const n = demand.n;
-    this.motorLimit = new Float64Array(n);
-    this.engineSpeed = new Float64Array(n);
-    this.engineFullLoad = new Float64Array(n);
-    this.torqueDemand = new Float64Array(n);
+    [this.motorLimit, this.engineSpeed, this.engineFullLoad, this.torqueDemand] = f64Views(n, 4);
     for (let k = 0; k < n; k++) {
       const w = demand.shaft_rad_s[k];
       this.motorLimit[k] = motor.torqueLimit_nm(w);

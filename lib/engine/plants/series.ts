@@ -3,6 +3,7 @@ import type { Battery } from "../models/battery";
 import type { ElectricMachine } from "../models/electric-machine";
 import type { WillansEngine } from "../models/willans-engine";
 import { S_AUX_W, clearStep } from "../step-output";
+import { f64Views } from "../buffers";
 import { MODE_ENGINE_OFF, MODE_ENGINE_ON, type Plant } from "./plant";
 import { bookTractionDriveline, finishBattery, motorDrive, regenerate } from "./common";
 import { runGenset, type GensetParams } from "./genset";
@@ -23,8 +24,7 @@ export class SeriesPlant implements Plant {
   constructor(readonly demand: Demand, readonly motor: ElectricMachine, readonly genset: GensetParams, readonly battery: Battery, readonly aux_w: number) {
     this.engine = genset.engine;
     const n = demand.n;
-    this.motorLimit = new Float64Array(n);
-    this.loadBus_w = new Float64Array(n);
+    [this.motorLimit, this.loadBus_w] = f64Views(n, 2);
     for (let k = 0; k < n; k++) {
       const w = demand.shaft_rad_s[k];
       const limit = motor.torqueLimit_nm(w);

@@ -42,11 +42,12 @@ export class ParallelRuleStrategy implements Strategy {
     const demand = plant.torqueDemand[k];
     const limit = w <= m.max_rad_s ? plant.motorLimit[k] : 0;
     const aux = plant.aux_w;
-    const discharge = b.dischargeLimit_w(soc, d.dt_s);
-    const electricBus = m.electrical_w(d.shaft_w[k]) + aux;
-    if (msToKmh(d.speed_m_s[k]) <= this.p.electricSpeedMax_kmh && soc > this.p.socLow && demand <= limit && electricBus <= discharge) return;
-    ctl[0] = MODE_ENGINE_ON;
+    const slow = msToKmh(d.speed_m_s[k]) <= this.p.electricSpeedMax_kmh && soc > this.p.socLow && demand <= limit;
     const fullLoad = plant.engineFullLoad[k];
+    // The discharge limit costs an OCV lookup: only needed for electric drive or boost.
+    const discharge = slow || demand > fullLoad ? b.dischargeLimit_w(soc, d.dt_s) : 0;
+    if (slow && m.electrical_w(d.shaft_w[k]) + aux <= discharge) return;
+    ctl[0] = MODE_ENGINE_ON;
     let t = 0;
     if (demand > fullLoad) {
       const byBattery = ((discharge - aux) * m.efficiency) / w;
