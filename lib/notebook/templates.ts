@@ -51,7 +51,7 @@ const TEMPLATES: Record<PowertrainKind, (label: string) => Step[]> = {
     ...VIEWS, ["energy_flow"],
   ],
   parallel: (m) => [
-    ["note", { note: "Midsize parallel hybrid: the petrol engine and a 30 kW motor share the gearbox input shaft." }],
+    ["note", { note: "Midsize parallel hybrid: the petrol engine and a 30 kW motor share the gearbox input shaft; 1.6 kWh pack." }],
     ["parameters", { params: { curb_mass: "1520 kg", payload: "80 kg" } }],
     ["drive_cycle"], body(m), ["driveline"], ["engine", SPARK_ENGINE],
     ["electric_machine", { params: { peak_power: "30 kW", peak_torque: "150 N·m", max_speed: "6000 rpm", efficiency: "0.90" } }],
@@ -59,11 +59,12 @@ const TEMPLATES: Record<PowertrainKind, (label: string) => Step[]> = {
       capacity: "6.5 Ah", ocv_soc: "0, 0.5, 1", ocv_voltage: "220, 245, 265 V", resistance: "0.15 Ω",
       soc_initial: "0.60", soc_min: "0.40", soc_max: "0.80", max_discharge_c: "20 C", max_charge_c: "15 C",
     } }],
-    ["energy_manager", { params: { kind: "ecms", equivalence_factor: "2.5", soc_feedback_gain: "5", soc_target: "0.60", control_points: "41" } }],
+    // the rule as the engine defines it (docs/engine.md); ECMS values are prefilled for a switch
+    ["energy_manager", { params: { kind: "rule", electric_speed_max: "50 km/h", charge_power: "0.5 kW" } }],
     ...VIEWS, ["strategy_comparison"],
   ],
   series: (m) => [
-    ["note", { note: "Midsize series hybrid: a 1.2 L engine drives a 60 kW generator; a 110 kW motor drives the wheels." }],
+    ["note", { note: "Midsize series hybrid: a 1.2 L engine drives a 60 kW generator; a 110 kW motor drives the wheels; 5.4 kWh pack." }],
     ["parameters", { params: { curb_mass: "1650 kg", payload: "80 kg" } }],
     ["drive_cycle"], body(m), ["driveline", SINGLE_GEAR],
     ["engine", { params: {
@@ -73,10 +74,10 @@ const TEMPLATES: Record<PowertrainKind, (label: string) => Step[]> = {
     ["generator_set", { params: { peak_power: "60 kW", efficiency: "0.92" } }],
     ["electric_machine", { params: { peak_power: "110 kW", peak_torque: "260 N·m", max_speed: "12000 rpm", efficiency: "0.90" } }],
     ["battery_pack", { params: {
-      capacity: "40 Ah", ocv_soc: "0, 0.5, 1", ocv_voltage: "320, 360, 400 V", resistance: "0.10 Ω",
-      soc_initial: "0.60", soc_min: "0.30", soc_max: "0.80", max_discharge_c: "5 C", max_charge_c: "3 C",
+      capacity: "15 Ah", ocv_soc: "0, 0.5, 1", ocv_voltage: "320, 360, 400 V", resistance: "0.10 Ω",
+      soc_initial: "0.55", soc_min: "0.30", soc_max: "0.80", max_discharge_c: "5 C", max_charge_c: "3 C",
     } }],
-    ["energy_manager", { params: { kind: "thermostat", soc_on: "0.45", soc_off: "0.70", on_power: "30 kW" } }],
+    ["energy_manager", { params: { kind: "thermostat", soc_on: "0.50", soc_off: "0.58", on_power: "20 kW", soc_target: "0.55" } }],
     ...VIEWS, ["strategy_comparison"],
   ],
 };
