@@ -6,7 +6,8 @@ import { fieldLabel } from "./blocks";
 import { compileFields, type FieldContext } from "./compile-fields";
 import type { CompileMessage, SourceTable } from "./compile-types";
 import { SECTION_KIND, validateWithEngine } from "./compile-validate";
-import type { BlockSnapshot } from "./model";
+import type * as Y from "yjs";
+import { readDoc, type BlockSnapshot } from "./model";
 import { evaluateParameters, type ParameterResult } from "./parameters";
 
 export type { CompileMessage, Source, SourceTable } from "./compile-types";
@@ -121,6 +122,11 @@ export function compile(input: CompileInput): CompileResult {
   if (!checked.ok) messages.push(...checked.messages);
   const hasError = messages.some((m) => m.severity === "error");
   return { scenario: hasError || !checked.ok ? undefined : checked.scenario, messages, sources, parameters: params.results, values };
+}
+
+/** compile(readDoc(doc)) */
+export function compileDoc(doc: Y.Doc): CompileResult {
+  return compile(readDoc(doc));
 }
 
 function compileSection(kind: BlockKind, block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, pt: PowertrainKind): void {

@@ -2,7 +2,7 @@ import { QUANTITIES, isDimensionless, sameDimension, describeDimension, type Qua
 import { evaluateFormula, identifiers, type Scope, type ScopeValue } from "./formula";
 import { rewriteUnitLiterals } from "./formula-units";
 import { isReservedName } from "./safe-parser";
-import { findUnit, fromSI, mismatchMessage, parseMeasured, toSI, unknownUnitMessage, type UnitDef } from "./units";
+import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage, type UnitDef } from "./units";
 
 export type { Scope, ScopeValue } from "./formula";
 
@@ -55,7 +55,8 @@ function unitOf(spec: ValueSpec): UnitDef {
 }
 
 /** Evaluates a field text against the unit and dimension the field expects. */
-export function evaluateValue(text: string, spec: ValueSpec, env: Environment = EMPTY_ENV): ValueResult {
+export function evaluateValue(written: string, spec: ValueSpec, env: Environment = EMPTY_ENV): ValueResult {
+  const text = normaliseSymbols(written);
   const fieldUnit = unitOf(spec);
   if (text.trim() === "") return { ok: false, message: "is empty", at: 0 };
   const { body, bracket } = splitBracketUnit(text);

@@ -1,5 +1,5 @@
 import { EMPTY_ENV, evaluateValue, splitBracketUnit, type Environment, type ValueSpec } from "./expressions";
-import { findUnit, fromSI, mismatchMessage, parseMeasured, unknownUnitMessage, type UnitDef } from "./units";
+import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, unknownUnitMessage, type UnitDef } from "./units";
 
 /**
  * List syntax: items separated by commas, semicolons, tabs or new lines (commas inside
@@ -50,7 +50,8 @@ function listUnit(text: string, items: Item[]): { unit?: UnitDef; body: string }
   return { body: text };
 }
 
-export function parseList(text: string, spec: ValueSpec, env: Environment = EMPTY_ENV): ListResult {
+export function parseList(written: string, spec: ValueSpec, env: Environment = EMPTY_ENV): ListResult {
+  const text = normaliseSymbols(written);
   const first = splitList(text);
   if (first.length === 0) return { ok: true, values: [], values_si: [] };
   const lu = listUnit(text, first);

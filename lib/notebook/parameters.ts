@@ -1,7 +1,7 @@
 import { QUANTITIES, describeDimension, sameDimension, type Dimension } from "./dimensions";
 import { evaluateFormula, type ScopeValue } from "./formula";
 import { referencedNames, splitBracketUnit, validParameterName, type Environment } from "./expressions";
-import { findUnit, parseMeasured, toSI, unknownUnitMessage } from "./units";
+import { findUnit, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage } from "./units";
 import { isDimensionless } from "./dimensions";
 
 /** One named parameter as written in a Parameters block. */
@@ -27,7 +27,8 @@ const BARE = findUnit("")!;
  * bare number is a pure number, a formula gets the dimension it computes (or the bracket unit's
  * if it computes a pure number).
  */
-export function evaluateParameterText(text: string, scope: Environment["scope"]): ParameterResult {
+export function evaluateParameterText(written: string, scope: Environment["scope"]): ParameterResult {
+  const text = normaliseSymbols(written);
   if (text.trim() === "") return { ok: false, message: "is empty", at: 0 };
   const { body, bracket } = splitBracketUnit(text);
   if (!bracket) {

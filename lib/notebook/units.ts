@@ -54,6 +54,14 @@ export function mismatchMessage(expectedUnit: string, expected: Quantity, gotUni
   return `expected ${exp}, got ${gotUnit} (${QUANTITIES[got].label})`;
 }
 
+/**
+ * Typographic symbols people paste from documents: the minus sign (U+2212) and the
+ * multiplication sign. One character each, so positions in messages stay right.
+ */
+export function normaliseSymbols(text: string): string {
+  return text.replace(/\u2212/g, "-").replace(/\u00d7/g, "*");
+}
+
 export const NUMBER_PATTERN = /^[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?/;
 
 export interface Measured {

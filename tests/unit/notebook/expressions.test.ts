@@ -53,6 +53,10 @@ describe("literal values", () => {
   it("energy is not torque, though both are N·m in SI", () => {
     expect(bad("15 kWh", torque).message).toContain("got kWh (energy)");
   });
+  it("typographic minus and multiplication signs are understood", () => {
+    expect(ok("\u22125 %", ratio).value).toBe(-0.05);
+    expect(ok("2 \u00d7 base_mass", mass).value).toBe(3000);
+  });
   it("a decimal comma is explained", () => {
     expect(bad("1,5 t", mass)).toMatchObject({ message: expect.stringContaining("decimals with a point"), at: 1 });
   });
