@@ -30,7 +30,7 @@ function RoleCell({ member }: { member: MemberRow }) {
         const role = ROLES.find((r) => r === event.target.value);
         if (role) changeRole(member, role as Role);
       }}
-      className="rounded-control border border-rule-strong bg-paper-raised px-2 py-1 text-sm"
+      className="select border-rule-strong py-1 pl-2.5 text-sm"
     >
       {ROLE_OPTIONS.map((o) => (
         <option key={o.value} value={o.value}>

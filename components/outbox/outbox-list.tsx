@@ -7,7 +7,6 @@ import { Linkified } from "./linkify";
 
 type OutboxMessage = { id: string; to: string; subject: string; text: string; html: string | null; receivedAt: string };
 
-const timeFormat = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "medium", timeZone: "UTC" });
 
 export function OutboxList() {
   const outbox = useQuery({
@@ -43,7 +42,7 @@ export function OutboxList() {
               <article aria-labelledby={`mail-${message.id}`} className="rounded-card border border-rule bg-paper-raised p-gutter shadow-card">
                 <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2 border-b border-rule pb-3">
                   <h2 id={`mail-${message.id}`} className="text-base font-semibold">{message.subject}</h2>
-                  <p className="num text-xs text-muted">{timeFormat.format(new Date(message.receivedAt))} UTC</p>
+                  <p className="num text-xs text-muted">{new Date(message.receivedAt).toISOString().slice(0, 19).replace("T", " ")} UTC</p>
                 </header>
                 <p className="mb-3 text-sm">
                   <span className="text-muted">To </span>

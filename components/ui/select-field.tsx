@@ -22,7 +22,7 @@ export function SelectField({ label, error, options, className = "", id, ...sele
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? errorId : undefined}
         className={
-          "rounded-control border bg-paper-raised px-3 py-2 text-ink " +
+          "select py-2 pl-3 " +
           (error ? "border-danger" : "border-rule-strong")
         }
         {...select}

@@ -63,6 +63,9 @@ describe("onboarding: owner invites a reviewer", () => {
     await page.getByText(`Invitation sent to ${reviewerAccount.email}.`).waitFor();
     await page.getByRole("cell", { name: reviewerAccount.email, exact: true }).waitFor(); // listed as pending
     await screenshot(page, "04-members-owner-after-invite");
+    await page.setViewportSize({ width: 390, height: 844 }); // a phone, to see the layout hold
+    await screenshot(page, "04b-members-owner-narrow");
+    await page.setViewportSize({ width: 1280, height: 860 });
     expect(ownerConsole.take()).toEqual([]);
 
     // 4. The development outbox shows the invitation e-mail with a clickable link.
