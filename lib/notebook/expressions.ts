@@ -2,7 +2,7 @@ import { QUANTITIES, isDimensionless, sameDimension, describeDimension, type Qua
 import { evaluateFormula, identifiers, type Scope, type ScopeValue } from "./formula";
 import { rewriteUnitLiterals } from "./formula-units";
 import { isReservedName } from "./safe-parser";
-import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage, type UnitDef } from "./units";
+import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage, type Measured, type UnitDef } from "./units";
 
 export type { Scope, ScopeValue } from "./formula";
 
@@ -60,33 +60,36 @@ export function evaluateValue(written: string, spec: ValueSpec, env: Environment
   const fieldUnit = unitOf(spec);
   if (text.trim() === "") return { ok: false, message: "is empty", at: 0 };
   const { body, bracket } = splitBracketUnit(text);
-  const comma = /^\s*[-+]?\d+,\d+\s*[^\s\d,]*\s*$/.exec(body);
-  if (comma) return { ok: false, message: "write decimals with a point (1.5, not 1,5); commas separate list items", at: body.indexOf(",") };
+  if (/^\s*[-+]?\d+,\d+\s*[^\s\d,]*\s*$/.test(body)) {
+    return { ok: false, message: "write decimals with a point (1.5, not 1,5); commas separate list items", at: body.indexOf(",") };
+  }
   if (!bracket) {
     const lit = parseMeasured(body, fieldUnit);
-    if (lit.ok) {
-      const m = lit.measured;
-      if (m.unit.quantity !== spec.quantity) {
-        return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, m.unit.symbol || "a pure number", m.unit.quantity), at: 0 };
-      }
-      const value = m.unit === fieldUnit ? m.value : fromSI(m.value_si, fieldUnit);
-      return finish(value, m.value_si, [], spec);
-    }
+    if (lit.ok) return literalValue(lit.measured, spec, fieldUnit);
     if ("message" in lit) return { ok: false, message: lit.message, at: lit.at };
   }
+  return formulaValue(body, bracket, spec, fieldUnit, env);
+}
+
+function literalValue(m: Measured, spec: ValueSpec, fieldUnit: UnitDef): ValueResult {
+  if (m.unit.quantity !== spec.quantity) {
+    return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, m.unit.symbol || "a pure number", m.unit.quantity), at: 0 };
+  }
+  // the number as written when the units agree: no round-off from a conversion
+  const value = m.unit === fieldUnit ? m.value : fromSI(m.value_si, fieldUnit);
+  return finish(value, m.value_si, [], spec);
+}
+
+function formulaValue(body: string, bracket: Split["bracket"], spec: ValueSpec, fieldUnit: UnitDef, env: Environment): ValueResult {
   const r = evaluateQuantityFormula(body, bracket, env);
   if (!r.ok) return r;
-  if (r.readIn) {
-    const unit = r.readIn ?? fieldUnit;
-    if (unit.quantity !== spec.quantity) {
-      return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, unit.symbol, unit.quantity), at: bracket?.at };
-    }
+  if (r.readIn && r.readIn.quantity !== spec.quantity) {
+    return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, r.readIn.symbol, r.readIn.quantity), at: bracket?.at };
   }
-  if (r.pure && !r.readIn) {
-    return finish(r.value_si, toSI(r.value_si, fieldUnit), r.names, spec);
-  }
+  if (r.pure) return finish(r.value_si, toSI(r.value_si, fieldUnit), r.names, spec);
   if (!sameDimension(r.dim, QUANTITIES[spec.quantity].dim)) {
-    return { ok: false, message: `expected ${spec.unit ? `${spec.unit} (${QUANTITIES[spec.quantity].label})` : QUANTITIES[spec.quantity].label}, the formula gives ${describeDimension(r.dim)}`, at: 0 };
+    const expected = spec.unit ? `${spec.unit} (${QUANTITIES[spec.quantity].label})` : QUANTITIES[spec.quantity].label;
+    return { ok: false, message: `expected ${expected}, the formula gives ${describeDimension(r.dim)}`, at: 0 };
   }
   return finish(fromSI(r.value_si, fieldUnit), r.value_si, r.names, spec);
 }
@@ -117,11 +120,11 @@ function evaluateQuantityFormula(body: string, bracket: Split["bracket"], env: E
     const why = r.name === undefined ? undefined : env.broken.get(r.name);
     return why === undefined ? r : { ok: false, message: `parameter "${r.name}" has an error: ${why}`, at: r.at };
   }
-  if (!bracket) return { ...r, pure: isDimensionless(r.dim) };
+  if (!bracket) return { ...r, pure: isDimensionless(r.dim) && !r.si };
   const unit = findUnit(bracket.text);
   if (!unit || unit.symbol === "") return { ok: false, message: unknownUnitMessage(bracket.text), at: bracket.at };
   const unitDim = QUANTITIES[unit.quantity].dim;
-  if (isDimensionless(r.dim)) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, pure: false, readIn: unit, names: r.names };
+  if (isDimensionless(r.dim) && !r.si) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, pure: false, readIn: unit, names: r.names };
   if (!sameDimension(r.dim, unitDim)) {
     return { ok: false, message: `the formula gives ${describeDimension(r.dim)}, not ${unit.symbol} (${QUANTITIES[unit.quantity].label})`, at: bracket.at };
   }

@@ -1,4 +1,4 @@
-import { QUANTITIES, type Dimension } from "./dimensions";
+import { QUANTITIES, isDimensionless, type Dimension } from "./dimensions";
 import { checkDimensions, type Instr } from "./dimension-check";
 import { rewriteUnitLiterals, type Rewritten } from "./formula-units";
 import { FORBIDDEN_NAMES, FORMULA_MAX_DEPTH, FORMULA_MAX_LENGTH, safeParser } from "./safe-parser";
@@ -7,11 +7,14 @@ import { FORBIDDEN_NAMES, FORMULA_MAX_DEPTH, FORMULA_MAX_LENGTH, safeParser } fr
 export interface ScopeValue {
   value_si: number;
   dim: Dimension;
+  /** true when the value came from a unit (e.g. 5 % → 0.05), false for a bare number */
+  si?: boolean;
 }
 export type Scope = ReadonlyMap<string, ScopeValue>;
 
 export type FormulaResult =
-  | { ok: true; value_si: number; dim: Dimension; names: string[] }
+  /** si: the result is an SI quantity (a unit or a unit-carrying name took part), not a bare number */
+  | { ok: true; value_si: number; dim: Dimension; names: string[]; si: boolean }
   | { ok: false; message: string; at?: number; name?: string };
 
 const fail = (message: string, at?: number, name?: string): FormulaResult => ({ ok: false, message, at, name });
@@ -118,5 +121,6 @@ export function evaluateFormula(text: string, scope: Scope): FormulaResult {
   if (Number.isNaN(result)) return fail("the formula gives no number (e.g. square root or logarithm of a negative value, 0/0)");
   if (!Number.isFinite(result)) return fail("the formula gives an infinite value (division by zero or overflow)");
   const names = [...new Set(identifiers(rw.text).map((x) => x.name).filter((n) => scope.has(n)))];
-  return { ok: true, value_si: result === 0 ? 0 : result, dim: checked.dim, names };
+  const si = rw.literals.length > 0 || names.some((n) => scope.get(n)?.si !== false) || !isDimensionless(checked.dim);
+  return { ok: true, value_si: result === 0 ? 0 : result, dim: checked.dim, names, si };
 }

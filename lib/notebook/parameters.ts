@@ -12,7 +12,7 @@ export interface ParameterDef {
 }
 
 export type ParameterResult =
-  | { ok: true; value_si: number; dim: Dimension; unit?: string; names: string[] }
+  | { ok: true; value_si: number; dim: Dimension; unit?: string; names: string[]; si: boolean }
   | { ok: false; message: string; at?: number };
 
 export interface ParameterSet {
@@ -35,21 +35,21 @@ export function evaluateParameterText(written: string, scope: Environment["scope
     const lit = parseMeasured(body, BARE);
     if (lit.ok) {
       const m = lit.measured;
-      return { ok: true, value_si: m.value_si, dim: QUANTITIES[m.unit.quantity].dim, unit: m.unit.symbol || undefined, names: [] };
+      return { ok: true, value_si: m.value_si, dim: QUANTITIES[m.unit.quantity].dim, unit: m.unit.symbol || undefined, names: [], si: m.unit.symbol !== "" };
     }
     if ("message" in lit) return { ok: false, message: lit.message, at: lit.at };
   }
   const r = evaluateFormula(body, scope);
   if (!r.ok) return r;
-  if (!bracket) return { ok: true, value_si: r.value_si, dim: r.dim, names: r.names };
+  if (!bracket) return { ok: true, value_si: r.value_si, dim: r.dim, names: r.names, si: r.si };
   const unit = findUnit(bracket.text);
   if (!unit || unit.symbol === "") return { ok: false, message: unknownUnitMessage(bracket.text), at: bracket.at };
   const unitDim = QUANTITIES[unit.quantity].dim;
-  if (isDimensionless(r.dim)) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, unit: unit.symbol, names: r.names };
+  if (isDimensionless(r.dim) && !r.si) return { ok: true, value_si: toSI(r.value_si, unit), dim: unitDim, unit: unit.symbol, names: r.names, si: true };
   if (!sameDimension(r.dim, unitDim)) {
     return { ok: false, message: `the formula gives ${describeDimension(r.dim)}, not ${unit.symbol}`, at: bracket.at };
   }
-  return { ok: true, value_si: r.value_si, dim: r.dim, unit: unit.symbol, names: r.names };
+  return { ok: true, value_si: r.value_si, dim: r.dim, unit: unit.symbol, names: r.names, si: true };
 }
 
 /**
@@ -95,7 +95,7 @@ export function evaluateParameters(defs: readonly ParameterDef[]): ParameterSet 
       );
     }
     const r = results.get(name)!;
-    if (r.ok) scope.set(name, { value_si: r.value_si, dim: r.dim });
+    if (r.ok) scope.set(name, { value_si: r.value_si, dim: r.dim, si: r.si });
     else broken.set(name, r.message);
   };
   for (const name of byName.keys()) visit(name);

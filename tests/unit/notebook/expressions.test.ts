@@ -84,6 +84,15 @@ describe("formulas", () => {
     expect(ok("n * 20 [W]", power).value).toBeCloseTo(0.06, 12);
     expect(ok("(1 + 2) * 10 [hp]", power).value_si).toBeCloseTo(30 * 745.69987158227022, 6);
   });
+  it("a ratio that came from a unit stays a quantity: 2 % × 2 in a percent field is 4 %", () => {
+    const grade: ValueSpec = { quantity: "ratio", unit: "%" };
+    const set = evaluateParameters([{ name: "k", text: "2 %" }, { name: "j", text: "3" }]);
+    expect(evaluateValue("2 % * 2", grade, set.env)).toMatchObject({ ok: true, value: 4 });
+    expect(evaluateValue("k * 2", grade, set.env)).toMatchObject({ ok: true, value: 4 });
+    expect(evaluateValue("k * 2", ratio, set.env)).toMatchObject({ ok: true, value: 0.04 });
+    // a bare-number parameter is read in the field's unit
+    expect(evaluateValue("j * 2", grade, set.env)).toMatchObject({ ok: true, value: 6 });
+  });
   it("a bracket unit after a dimensioned result is a check", () => {
     expect(ok("base_mass [kg]", mass).value).toBe(1500);
     expect(bad("base_mass [kW]", power).message).toContain("gives mass, not kW");

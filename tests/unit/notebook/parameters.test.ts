@@ -20,8 +20,8 @@ describe("parameters", () => {
 
   it("a literal keeps its unit's dimension; a bare number is a pure number", () => {
     const set = evaluateParameters([{ name: "p", text: "50 kW" }, { name: "k", text: "0.8" }]);
-    expect(set.env.scope.get("p")).toEqual({ value_si: 50_000, dim: [2, 1, -3, 0] });
-    expect(set.env.scope.get("k")).toEqual({ value_si: 0.8, dim: [0, 0, 0, 0] });
+    expect(set.env.scope.get("p")).toEqual({ value_si: 50_000, dim: [2, 1, -3, 0], si: true });
+    expect(set.env.scope.get("k")).toEqual({ value_si: 0.8, dim: [0, 0, 0, 0], si: false });
   });
 
   it("names a two-step cycle on both members", () => {
