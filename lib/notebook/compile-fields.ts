@@ -27,28 +27,36 @@ export interface FieldContext {
   values: Map<string, Record<string, unknown>>;
 }
 
-function fieldValue(f: FieldDef, text: string, block: BlockSnapshot, ctx: FieldContext): { ok: true; value: unknown } | { ok: false } {
-  const error = (message: string, at?: number) => {
-    ctx.messages.push({ blockId: block.id, field: f.key, severity: "error", text: `${fieldLabel(block.kind, f.key)}: ${message}`, at });
-    return { ok: false as const };
-  };
+export type FieldOutcome = { ok: true; value: string | number | number[] } | { ok: false; message: string; at?: number };
+
+/**
+ * One field's text → its Scenario value (number in the field's unit, list, or choice), or a
+ * message with the character position. The UI can call it to preview a value while typing.
+ */
+export function evaluateField(f: FieldDef, text: string, env: Environment): FieldOutcome {
   switch (f.type) {
     case "choice": {
       const v = text.trim();
-      if (!f.options.some((o) => o.value === v)) return error(`"${v}" is not one of ${f.options.map((o) => o.value).join(", ")}`);
+      if (!f.options.some((o) => o.value === v)) return { ok: false, message: `"${v}" is not one of ${f.options.map((o) => o.value).join(", ")}` };
       return { ok: true, value: v };
     }
     case "number": {
-      const r = evaluateValue(text, { quantity: f.quantity, unit: f.unit, integer: f.integer }, ctx.env);
-      return r.ok ? { ok: true, value: r.value } : error(r.message, r.at);
+      const r = evaluateValue(text, { quantity: f.quantity, unit: f.unit, integer: f.integer }, env);
+      return r.ok ? { ok: true, value: r.value } : r;
     }
     case "list": {
-      const r = parseList(text, { quantity: f.quantity, unit: f.unit }, ctx.env);
-      return r.ok ? { ok: true, value: r.values } : error(r.message, r.at);
+      const r = parseList(text, { quantity: f.quantity, unit: f.unit }, env);
+      return r.ok ? { ok: true, value: r.values } : { ok: false, message: r.message, at: r.at };
     }
     case "text":
       return { ok: true, value: text.trim() };
   }
+}
+
+function fieldValue(f: FieldDef, text: string, block: BlockSnapshot, ctx: FieldContext): FieldOutcome {
+  const r = evaluateField(f, text, ctx.env);
+  if (!r.ok) ctx.messages.push({ blockId: block.id, field: f.key, severity: "error", text: `${fieldLabel(block.kind, f.key)}: ${r.message}`, at: r.at });
+  return r;
 }
 
 /**

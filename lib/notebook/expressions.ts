@@ -12,8 +12,9 @@ export type { Scope, ScopeValue } from "./formula";
  *     field's own unit),
  *   - a formula over named parameters, numbers may carry units: "2 * base_mass",
  *     "base_mass + 100 kg", optionally ending in a unit in brackets: "n_cells * 3.7 [V]".
- * Formulas compute in SI. A formula whose result is a pure number is read in the bracket unit,
- * else in the field's unit; a formula whose result has a dimension must match the field's.
+ * Formulas compute in SI. A result to which a unit contributed is an SI quantity and must have
+ * the field's dimension; a bare-number result is read in the bracket unit, else in the field's.
+ * docs/notebook.md has the full rules.
  */
 export interface Environment {
   scope: Scope;

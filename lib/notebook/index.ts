@@ -11,3 +11,4 @@ export { parseList, splitList, LIST_MAX_ITEMS, type ListResult } from "./lists";
 export { findUnit, unitsOf, parseMeasured, normaliseSymbols, toSI, fromSI, type UnitDef, type Measured } from "./units";
 export { QUANTITIES, describeDimension, type Quantity, type Dimension } from "./dimensions";
 export { FORMULA_MAX_LENGTH, UNARY_FUNCTIONS, CALL_FUNCTIONS, CONSTANTS } from "./safe-parser";
+export { evaluateField, type FieldOutcome } from "./compile-fields";
