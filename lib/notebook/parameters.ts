@@ -1,6 +1,7 @@
 import { QUANTITIES, describeDimension, sameDimension, type Dimension } from "./dimensions";
 import { evaluateFormula, type ScopeValue } from "./formula";
 import { referencedNames, splitBracketUnit, validParameterName, type Environment } from "./expressions";
+import { UNITS } from "./unit-table";
 import { findUnit, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage } from "./units";
 import { isDimensionless } from "./dimensions";
 
@@ -95,10 +96,24 @@ export function evaluateParameters(defs: readonly ParameterDef[]): ParameterSet 
       );
     }
     const r = results.get(name)!;
+    if (r.ok && r.unit === undefined) r.unit = displayUnit(r, results);
     if (r.ok) scope.set(name, { value_si: r.value_si, dim: r.dim, si: r.si });
     else broken.set(name, r.message);
   };
   for (const name of byName.keys()) visit(name);
   for (const [name, r] of results) if (!r.ok && !broken.has(name)) broken.set(name, r.message);
   return { env: { scope, broken }, results };
+}
+
+/**
+ * A unit to show a formula parameter in: that of the first parameter it uses with the same
+ * dimension (2 * base_mass → kg), else the SI unit of its dimension; none for pure numbers.
+ */
+function displayUnit(r: Extract<ParameterResult, { ok: true }>, results: ReadonlyMap<string, ParameterResult>): string | undefined {
+  if (isDimensionless(r.dim)) return undefined;
+  for (const n of r.names) {
+    const dep = results.get(n);
+    if (dep?.ok && dep.unit && sameDimension(dep.dim, r.dim)) return dep.unit;
+  }
+  return UNITS.find((u) => u.to_si === 1 && u.per === undefined && u.symbol !== "" && sameDimension(QUANTITIES[u.quantity].dim, r.dim))?.symbol;
 }

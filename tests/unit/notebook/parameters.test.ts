@@ -24,6 +24,15 @@ describe("parameters", () => {
     expect(set.env.scope.get("k")).toEqual({ value_si: 0.8, dim: [0, 0, 0, 0], si: false });
   });
 
+  it("formula parameters get a unit to be shown in", () => {
+    const set = evaluateParameters([
+      { name: "m", text: "1.4 t" }, { name: "m2", text: "2 * m" }, { name: "f", text: "m * 9.81 m/s²" }, { name: "k", text: "2 * 3" },
+    ]);
+    expect(set.results.get("m2")).toMatchObject({ ok: true, unit: "t", value_si: 2800 });
+    expect(set.results.get("f")).toMatchObject({ ok: true, unit: "N" });
+    expect(set.results.get("k")).toMatchObject({ ok: true, unit: undefined });
+  });
+
   it("names a two-step cycle on both members", () => {
     const set = evaluateParameters([{ name: "a", text: "b + 1" }, { name: "b", text: "a * 2" }]);
     expect(msg(set, "a")).toBe("cycle: a → b → a");
