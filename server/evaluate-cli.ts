@@ -2,6 +2,7 @@
  * `npm run --silent evaluate -- scenario.json`: prints the Result JSON on stdout and
  * nothing else; an unreadable or invalid scenario exits 1 (2 for usage) with the
  * message(s) on stderr, one per line. Reads stdin when the file is "-".
+ * `--step-ledger` adds the per-step ledger (W) to the Result.
  */
 import { readFileSync } from "node:fs";
 import { evaluateScenarioInput } from "../lib/engine/index";
@@ -12,8 +13,9 @@ function fail(code: number, lines: string[]): never {
 }
 
 function main(argv: string[]): void {
-  const args = argv.filter((a) => a !== "--");
-  if (args.length !== 1) fail(2, ["usage: npm run --silent evaluate -- scenario.json   (or - for stdin)"]);
+  const stepLedger = argv.includes("--step-ledger");
+  const args = argv.filter((a) => a !== "--" && a !== "--step-ledger");
+  if (args.length !== 1) fail(2, ["usage: npm run --silent evaluate -- [--step-ledger] scenario.json   (or - for stdin)"]);
   const file = args[0];
   let text: string;
   try {
@@ -27,7 +29,7 @@ function main(argv: string[]): void {
   } catch (err) {
     fail(1, [`${file}: not valid JSON (${(err as Error).message})`]);
   }
-  const outcome = evaluateScenarioInput(input);
+  const outcome = evaluateScenarioInput(input, { stepLedger });
   if (!outcome.ok) fail(1, [`${file}: invalid scenario`, ...outcome.errors.map((e) => `  ${e.message}`)]);
   process.stdout.write(JSON.stringify(outcome.result) + "\n");
 }

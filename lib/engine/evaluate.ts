@@ -87,7 +87,12 @@ function kpi(s: Scenario, d: Demand, run: Run): Kpi {
 }
 
 /** Evaluates a validated scenario. Fails only for a strategy kind this build lacks. */
-export function evaluateScenario(s: Scenario): EvaluateOutcome {
+export interface EvaluateOptions {
+  /** Add `step_ledger_w` (15 arrays of N) to the Result. */
+  stepLedger?: boolean;
+}
+
+export function evaluateScenario(s: Scenario, options: EvaluateOptions = {}): EvaluateOutcome {
   const { cycle, demand, plant } = prepare(s);
   const made = makeStrategy(s, plant);
   if (!made.ok) {
@@ -95,7 +100,7 @@ export function evaluateScenario(s: Scenario): EvaluateOutcome {
     return { ok: false, errors: [{ path: "strategy.kind", value: made.kind, rule: made.reason, message }] };
   }
   const socInitial = s.battery && s.powertrain !== "conventional" ? s.battery.soc_initial : 0;
-  const run = simulate(plant, made.strategy, socInitial);
+  const run = simulate(plant, made.strategy, socInitial, options.stepLedger === true);
   const v = s.vehicle;
   const stats = cycleStats(cycle, {
     inertial_mass_kg: v.mass_kg * (1 + v.rotating_mass_factor), mass_kg: v.mass_kg,
@@ -117,6 +122,7 @@ export function evaluateScenario(s: Scenario): EvaluateOutcome {
     closure_error_j: closureError_j(run.ledger),
     closure_error_max_step_w: run.maxStepClosure_w,
     findings,
+    ...(run.stepLedger ? { step_ledger_w: run.stepLedger } : {}),
     cycle: { ...stats, dt_s: cycle.dt_s, steps: demand.n },
     traces: traces(demand, run, e ? e.fuel.lhv_mj_kg * 1e3 : 0),
     curves: {
@@ -129,8 +135,8 @@ export function evaluateScenario(s: Scenario): EvaluateOutcome {
 }
 
 /** The one call for the API route and the CLI: unknown JSON in, Result or errors out. */
-export function evaluateScenarioInput(input: unknown): EvaluateOutcome {
+export function evaluateScenarioInput(input: unknown, options: EvaluateOptions = {}): EvaluateOutcome {
   const parsed = parseScenario(input);
   if (!parsed.ok) return parsed;
-  return evaluateScenario(parsed.scenario);
+  return evaluateScenario(parsed.scenario, options);
 }

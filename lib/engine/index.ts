@@ -1,7 +1,7 @@
 /**
  * Joulebook quasi-static energy engine: pure TypeScript, no I/O. See docs/engine.md.
  */
-export { evaluateScenarioInput, evaluateScenario, type EvaluateOutcome } from "./evaluate";
+export { evaluateScenarioInput, evaluateScenario, type EvaluateOutcome, type EvaluateOptions } from "./evaluate";
 export { parseScenario, migrateScenario, CURRENT_FORMAT, type ParseOutcome, type ScenarioError } from "./scenario";
 export type { Scenario, ScenarioInput, Powertrain, StrategyKind } from "./scenario";
 export type { Result, Kpi, Traces } from "./result";

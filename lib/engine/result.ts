@@ -56,6 +56,8 @@ export interface Result {
   /** Largest single-step closure error, W. */
   closure_error_max_step_w: number;
   findings: Finding[];
+  /** Per-step ledger as powers (W; × dt = J per step), only with `{ stepLedger: true }`. */
+  step_ledger_w?: Record<keyof Ledger, number[]>;
   cycle: CycleStats & { dt_s: number; steps: number };
   traces: Traces;
   curves: {

@@ -1,6 +1,6 @@
 import type { Plant } from "./plants/plant";
 import type { Strategy } from "./strategies/strategy";
-import type { Ledger } from "./ledger";
+import { SINK_KEYS, SUPPLY_KEYS, type Ledger, type LedgerKey } from "./ledger";
 import { EpisodeTracker } from "./episodes";
 import { zeros } from "./buffers";
 import {
@@ -33,6 +33,8 @@ export interface Run {
   tracker: EpisodeTracker;
   /** Largest |supply − sinks| of a single step, W. */
   maxStepClosure_w: number;
+  /** Per-step ledger in W (each key × dt gives the step's joules), when requested. */
+  stepLedger: Record<LedgerKey, number[]> | null;
   engineStarts: number;
 }
 
@@ -50,7 +52,13 @@ function allocTraces(n: number): RunTraces {
  * step model, the run records traces, sums the ledger and groups infeasible steps.
  * The loop allocates nothing per step.
  */
-export function simulate(plant: Plant, strategy: Strategy, socInitial: number): Run {
+function allocStepLedger(n: number): Record<LedgerKey, number[]> {
+  const out = {} as Record<LedgerKey, number[]>;
+  for (const key of [...SUPPLY_KEYS, ...SINK_KEYS]) out[key] = zeros(n);
+  return out;
+}
+
+export function simulate(plant: Plant, strategy: Strategy, socInitial: number, withStepLedger = false): Run {
   const d = plant.demand;
   const n = d.n;
   const t = allocTraces(n);
@@ -59,6 +67,7 @@ export function simulate(plant: Plant, strategy: Strategy, socInitial: number): 
   const tracker = new EpisodeTracker();
   let fuel = 0, battNet = 0, unmet = 0, brakes = 0, driveline = 0, clutch = 0, engine = 0, motor = 0;
   let generator = 0, battLoss = 0, aux = 0, maxClosure = 0, starts = 0, wasOn = 0;
+  const sl = withStepLedger ? allocStepLedger(n) : null;
   let soc = socInitial;
   strategy.reset(socInitial);
   for (let k = 0; k < n; k++) {
@@ -90,6 +99,13 @@ export function simulate(plant: Plant, strategy: Strategy, socInitial: number): 
     t.soc[k] = soc;
     t.fuel_w[k] = out[S_FUEL_W];
     tracker.step(k, out);
+    if (sl !== null) {
+      sl.fuel[k] = out[S_FUEL_W]; sl.battery_net[k] = net; sl.unmet_demand[k] = out[S_UNMET_W];
+      sl.aero[k] = d.aero_w[k]; sl.rolling[k] = d.rolling_w[k]; sl.grade[k] = d.grade_w[k]; sl.kinetic[k] = d.inertia_w[k];
+      sl.friction_brakes[k] = out[S_BRAKES_W]; sl.driveline[k] = out[S_DRIVELINE_W]; sl.clutch[k] = out[S_CLUTCH_W];
+      sl.engine[k] = out[S_ENGINE_LOSS_W]; sl.motor[k] = out[S_MOTOR_LOSS_W]; sl.generator[k] = out[S_GENERATOR_LOSS_W];
+      sl.battery_internal[k] = out[S_BATTERY_LOSS_W]; sl.auxiliaries[k] = out[S_AUX_W];
+    }
     soc = out[S_SOC_NEXT];
   }
   tracker.finish(n - 1);
@@ -104,5 +120,5 @@ export function simulate(plant: Plant, strategy: Strategy, socInitial: number): 
     friction_brakes: brakes * dt, driveline: driveline * dt, clutch: clutch * dt, engine: engine * dt,
     motor: motor * dt, generator: generator * dt, battery_internal: battLoss * dt, auxiliaries: aux * dt,
   };
-  return { traces: t, ledger, socFinal: soc, tracker, maxStepClosure_w: maxClosure, engineStarts: starts };
+  return { traces: t, ledger, socFinal: soc, tracker, maxStepClosure_w: maxClosure, engineStarts: starts, stepLedger: sl };
 }

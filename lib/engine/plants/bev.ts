@@ -25,7 +25,7 @@ export class BevPlant implements Plant {
     ctl[1] = 0;
   }
 
-  apply(k: number, soc: number, _mode: number, _value: number, out: Float64Array): void {
+  drive(k: number, soc: number, _mode: number, _value: number, out: Float64Array): number {
     clearStep(out);
     const d = this.demand;
     const aux = this.aux_w;
@@ -39,6 +39,10 @@ export class BevPlant implements Plant {
         bus += regenerate(out, d, k, this.motor, this.motorLimit[k], this.battery, soc, aux);
       }
     }
-    finishBattery(out, this.battery, soc, bus, d.dt_s);
+    return bus;
+  }
+
+  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+    finishBattery(out, this.battery, soc, this.drive(k, soc, mode, value, out), this.demand.dt_s);
   }
 }

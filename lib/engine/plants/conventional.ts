@@ -39,17 +39,16 @@ export class ConventionalPlant implements Plant {
     ctl[1] = 0;
   }
 
-  apply(k: number, soc: number, _mode: number, _value: number, out: Float64Array): void {
+  drive(k: number, _soc: number, _mode: number, _value: number, out: Float64Array): number {
     clearStep(out);
     const d = this.demand;
     const e = this.engine;
     const aux = this.aux_w;
     out[S_AUX_W] = aux;
-    noBattery(out, soc);
     const idle = e.idle_rad_s;
     if (d.moving[k] === 0) {
       runEngine(out, e, idle, aux, this.fullLoad[k], false);
-      return;
+      return 0;
     }
     const shaft = d.shaft_rad_s[k];
     const pw = d.wheel_w[k];
@@ -63,7 +62,7 @@ export class ConventionalPlant implements Plant {
         out[S_CLUTCH_W] = clutchTorque * (idle - shaft);
         runEngine(out, e, idle, clutchTorque * idle + aux, this.fullLoad[k], true);
       }
-      return;
+      return 0;
     }
     if (shaft >= idle) {
       const fromWheels = Math.min(aux, -d.shaft_w[k]);
@@ -73,6 +72,13 @@ export class ConventionalPlant implements Plant {
       out[S_BRAKES_W] = -pw;
       runEngine(out, e, idle, aux, this.fullLoad[k], false);
     }
+    return 0;
+  }
+
+  /** No traction battery: SOC is carried through unchanged. */
+  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+    this.drive(k, soc, mode, value, out);
+    noBattery(out, soc);
   }
 
   /** Engine speed of step k (for strategies and traces). */

@@ -64,7 +64,7 @@ export class ParallelPlant implements Plant {
     ctl[1] = controlPoints > 1 ? lo + ((j - 1) * (hi - lo)) / (controlPoints - 1) : lo;
   }
 
-  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+  drive(k: number, soc: number, mode: number, value: number, out: Float64Array): number {
     clearStep(out);
     const d = this.demand;
     const aux = this.aux_w;
@@ -78,7 +78,11 @@ export class ParallelPlant implements Plant {
         bus += regenerate(out, d, k, this.motor, this.motorLimit[k], this.battery, soc, aux);
       }
     }
-    finishBattery(out, this.battery, soc, bus, d.dt_s);
+    return bus;
+  }
+
+  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+    finishBattery(out, this.battery, soc, this.drive(k, soc, mode, value, out), this.demand.dt_s);
   }
 
   /**

@@ -26,6 +26,14 @@ export interface Plant {
   candidateCount(k: number, controlPoints: number): number;
   /** Writes candidate j of step k as ctl[0] = mode, ctl[1] = value. */
   candidate(k: number, j: number, controlPoints: number, ctl: Float64Array): void;
-  /** Evaluates control (mode, value) at step k from `soc`; see step-output.ts for `out`. */
+  /**
+   * Everything of control (mode, value) at step k except the battery: clears `out`, books
+   * fuel, losses and operating points, and returns the battery terminal power the bus needs
+   * (W, + discharge; 0 without a battery). Depends on `soc` only on braking steps
+   * (regeneration is curtailed by the charge limit), so DP can cache it per (k, candidate)
+   * on traction and standstill steps.
+   */
+  drive(k: number, soc: number, mode: number, value: number, out: Float64Array): number;
+  /** drive() followed by the battery step (finishBattery): the full exact step; see step-output.ts. */
   apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void;
 }

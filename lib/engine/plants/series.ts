@@ -49,7 +49,7 @@ export class SeriesPlant implements Plant {
     }
   }
 
-  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+  drive(k: number, soc: number, mode: number, value: number, out: Float64Array): number {
     clearStep(out);
     const d = this.demand;
     const aux = this.aux_w;
@@ -64,6 +64,10 @@ export class SeriesPlant implements Plant {
         bus += regenerate(out, d, k, this.motor, this.motorLimit[k], this.battery, soc, bus);
       }
     }
-    finishBattery(out, this.battery, soc, bus, d.dt_s);
+    return bus;
+  }
+
+  apply(k: number, soc: number, mode: number, value: number, out: Float64Array): void {
+    finishBattery(out, this.battery, soc, this.drive(k, soc, mode, value, out), this.demand.dt_s);
   }
 }

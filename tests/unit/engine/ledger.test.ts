@@ -68,6 +68,31 @@ describe("loss ledger closes (DESIGN §4 identity)", () => {
   });
 });
 
+describe("per-step ledger in the Result", () => {
+  it("each step of every powertrain closes and the steps sum to the totals", () => {
+    for (const p of POWERTRAINS) {
+      const out = evaluateScenario(parsed(example(p)), { stepLedger: true });
+      if (!out.ok) throw new Error();
+      const r = out.result;
+      const sl = r.step_ledger_w!;
+      const dt = r.cycle.dt_s;
+      for (let k = 0; k < r.cycle.steps; k++) {
+        let supply = 0, sinks = 0, scale = 0;
+        for (const key of SUPPLY_KEYS) { supply += sl[key][k]; scale += Math.abs(sl[key][k]); }
+        for (const key of SINK_KEYS) { sinks += sl[key][k]; scale += Math.abs(sl[key][k]); }
+        expect(Math.abs(supply - sinks)).toBeLessThanOrEqual(1e-12 * scale + 1e-9);
+      }
+      for (const key of [...SUPPLY_KEYS, ...SINK_KEYS]) {
+        const total = sl[key].reduce((a, b) => a + b, 0) * dt;
+        expect(Math.abs(total - r.ledger_j[key])).toBeLessThanOrEqual(1e-9 * (Math.abs(r.ledger_j[key]) + 1));
+      }
+      const plain = evaluateScenario(parsed(example(p)));
+      expect(plain.ok && "step_ledger_w" in plain.result).toBe(false); // off by default
+
+    }
+  });
+});
+
 describe("ledger identities (REFERENCES.md)", () => {
   it("inertial work over a rest-to-rest cycle sums to zero", () => {
     for (const [, cycle] of CYCLES) {
