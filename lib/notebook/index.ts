@@ -3,7 +3,7 @@ export * from "./block-kinds";
 export { FIELDS, fieldsOf, fieldOf, fieldActive, fieldLabel } from "./blocks";
 export type { FieldDef, NumberField, ListField, ChoiceField, TextField } from "./fields";
 export * from "./model";
-export { createScenarioDoc } from "./templates";
+export { createScenarioDoc, type TemplateOptions } from "./templates";
 export { compile, compileDoc, SCENARIO_FORMAT, type CompileInput, type CompileResult, type CompileMessage, type Source, type SourceTable } from "./compile";
 export { evaluateValue, splitBracketUnit, referencedNames, validParameterName, EMPTY_ENV, type Environment, type ValueSpec, type ValueResult } from "./expressions";
 export { evaluateParameters, evaluateParameterText, type ParameterDef, type ParameterResult, type ParameterSet } from "./parameters";

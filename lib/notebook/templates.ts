@@ -82,11 +82,25 @@ const TEMPLATES: Record<PowertrainKind, (label: string) => Step[]> = {
   ],
 };
 
-/** Fills `doc` (default: a new one) with the template blocks and meta; returns the doc. */
-export function createScenarioDoc(powertrain: PowertrainKind, name: string, doc: Y.Doc = new Y.Doc()): Y.Doc {
+export interface TemplateOptions {
+  /** texts that replace the template's, per block kind: { body: { mass: "3500 kg" } } */
+  params?: Partial<Record<BlockKind, Record<string, string>>>;
+  /** notes that replace the template's, per block kind */
+  notes?: Partial<Record<BlockKind, string>>;
+}
+
+/**
+ * Fills `doc` (default: a new one) with the template blocks and meta; returns the doc.
+ * `options` adapts a template (the demo's van documents start from the car templates).
+ */
+export function createScenarioDoc(powertrain: PowertrainKind, name: string, doc: Y.Doc = new Y.Doc(), options: TemplateOptions = {}): Y.Doc {
   doc.transact(() => {
     setMeta(doc, { name, powertrain });
-    for (const [kind, init] of TEMPLATES[powertrain](POWERTRAIN_LABELS[powertrain])) insertBlock(doc, kind, undefined, init);
+    for (const [kind, init] of TEMPLATES[powertrain](POWERTRAIN_LABELS[powertrain])) {
+      const params = { ...(init?.params ?? {}), ...(options.params?.[kind] ?? {}) };
+      const note = options.notes?.[kind] ?? init?.note;
+      insertBlock(doc, kind, undefined, { ...init, params, note });
+    }
   });
   return doc;
 }

@@ -112,6 +112,18 @@ describe("Yjs document helpers", () => {
     expect(readDoc(new Y.Doc()).powertrain).toBeNull();
   });
 
+  it("templates can be adapted: texts and notes per block kind", () => {
+    const doc = createScenarioDoc("bev", "Van", new Y.Doc(), {
+      params: { body: { mass: "3500 kg", frontal_area: "4.2 m²" } }, notes: { note: "A 3.5 t van." },
+    });
+    const blocks = readBlocks(doc);
+    const body = blocks.find((b) => b.kind === "body")!;
+    expect(body.params.mass).toBe("3500 kg");
+    expect(body.params.frontal_area).toBe("4.2 m²");
+    expect(body.params.drag_coefficient).toBe("0.30"); // untouched default
+    expect(blocks.find((b) => b.kind === "note")!.note).toBe("A 3.5 t van.");
+  });
+
   it("templates: one document per powertrain, survives an encode/decode round trip", () => {
     for (const pt of POWERTRAINS) {
       const doc = createScenarioDoc(pt, `Car ${pt}`);
