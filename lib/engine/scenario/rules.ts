@@ -38,7 +38,7 @@ function checkCycle(s: Scenario, push: Push): void {
     const n = duration / dt;
     if (Math.abs(n - Math.round(n)) > 1e-9 * Math.max(1, n))
       push(["cycle", "dt_s"], `must divide the ${duration} s duration of '${c.standard}' into whole steps`, dt);
-    else if (Math.round(n) > 2_000_000) push(["cycle", "dt_s"], "too small: more than 2,000,000 steps", dt);
+    else if (Math.round(n) > 1_000_000) push(["cycle", "dt_s"], "too small: more than 1,000,000 steps", dt);
     return;
   }
   if (c.speed_kmh === undefined) {
@@ -47,7 +47,7 @@ function checkCycle(s: Scenario, push: Push): void {
   }
   if (c.dt_s === undefined) push(["cycle", "dt_s"], "is required with speed_kmh samples");
   if (c.speed_kmh.length < 2) push(["cycle", "speed_kmh"], `needs at least 2 samples; has ${c.speed_kmh.length}`);
-  if (c.speed_kmh.length > 2_000_001) push(["cycle", "speed_kmh"], "too many samples (limit 2,000,001)", c.speed_kmh.length);
+  if (c.speed_kmh.length > 1_000_001) push(["cycle", "speed_kmh"], "too many samples (limit 1,000,001)", c.speed_kmh.length);
   if (c.grade_pct !== undefined && c.grade_pct.length !== c.speed_kmh.length)
     push(["cycle", "grade_pct"], `${c.grade_pct.length} values for ${c.speed_kmh.length} speed samples; need ${c.speed_kmh.length}`);
 }

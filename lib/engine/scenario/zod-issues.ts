@@ -12,8 +12,10 @@ function bound(issue: { minimum?: unknown; maximum?: unknown; inclusive?: boolea
 /** Turns one zod issue into our rule wording. */
 function ruleOf(issue: Issue): string {
   switch (issue.code) {
-    case "invalid_type":
-      return issue.input === undefined ? `is required (${issue.expected})` : `must be a finite ${issue.expected}`;
+    case "invalid_type": {
+      const what = issue.expected === "int" ? "a whole number" : issue.expected === "number" ? "a finite number" : issue.expected === "object" ? "an object" : issue.expected === "array" ? "an array" : `a ${issue.expected}`;
+      return issue.input === undefined ? `is required (${what})` : `must be ${what}`;
+    }
     case "too_small":
       return issue.origin === "array" ? `needs at least ${String(issue.minimum)} items` : `must be ${bound(issue, "min")}`;
     case "too_big":

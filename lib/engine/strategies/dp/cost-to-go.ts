@@ -15,10 +15,12 @@ export interface CostToGo {
   /** Steps of the cycle; rows 0..n (row n is the terminal cost). */
   n: number;
   socPoints: number;
+  /** Row stride: socPoints + 1; the extra cell repeats the last grid value so that SOC = soc_max needs no bounds check. */
+  stride: number;
   soc0: number;
   h: number;
   invH: number;
-  /** Row-major (n + 1) × socPoints, joules; Infinity where the window cannot be met. */
+  /** Row-major (n + 1) × stride, joules; Infinity where the window cannot be met. */
   J: Float64Array;
   lo: Float64Array;
   hi: Float64Array;
@@ -33,8 +35,8 @@ export function allocCostToGo(n: number, socPoints: number, socMin: number, socM
   const h = (socMax - socMin) / (socPoints - 1);
   const edges = new Float64Array(4 * (n + 1));
   return {
-    n, socPoints, soc0: socMin, h, invH: 1 / h,
-    J: new Float64Array((n + 1) * socPoints),
+    n, socPoints, stride: socPoints + 1, soc0: socMin, h, invH: 1 / h,
+    J: new Float64Array((n + 1) * (socPoints + 1)),
     lo: edges.subarray(0, n + 1), hi: edges.subarray(n + 1, 2 * (n + 1)),
     jLo: edges.subarray(2 * (n + 1), 3 * (n + 1)), jHi: edges.subarray(3 * (n + 1)),
   };
@@ -47,8 +49,8 @@ export function interpolate(c: CostToGo, k: number, s: number): number {
   let pos = (s - c.soc0) * c.invH;
   if (pos < 0) pos = 0;
   let idx = pos | 0;
-  if (idx > m - 2) idx = m - 2;
-  const base = k * m + idx;
+  if (idx > m - 1) idx = m - 1;
+  const base = k * c.stride + idx;
   const a = c.J[base];
   const b = c.J[base + 1];
   if (a + b < Infinity) return a + (pos - idx) * (b - a);
@@ -62,7 +64,7 @@ export function interpolate(c: CostToGo, k: number, s: number): number {
  */
 export function interpolateAtEdge(c: CostToGo, k: number, s: number, idx: number, a: number, b: number): number {
   const xl = c.soc0 + idx * c.h;
-  const xr = xl + c.h;
+  const xr = idx < c.socPoints - 1 ? xl + c.h : xl;
   const lo = c.lo[k];
   const hi = c.hi[k];
   let x0 = NaN, v0 = Infinity, x1 = NaN, v1 = Infinity;
