@@ -96,7 +96,7 @@ function formulaValue(body: string, bracket: Split["bracket"], spec: ValueSpec, 
 }
 
 function finish(value: number, value_si: number, names: string[], spec: ValueSpec): ValueResult {
-  if (!Number.isFinite(value)) return { ok: false, message: "is too large: not a finite number (infinite)" };
+  if (!Number.isFinite(value) || !Number.isFinite(value_si)) return { ok: false, message: "is too large: not a finite number (infinite)" };
   if (spec.integer) {
     const rounded = Math.round(value);
     // tolerate float noise from unit conversions, nothing more

@@ -29,7 +29,12 @@ const BARE = findUnit("")!;
  * if it computes a pure number).
  */
 export function evaluateParameterText(written: string, scope: Environment["scope"]): ParameterResult {
-  const text = normaliseSymbols(written);
+  const r = parameterValue(normaliseSymbols(written), scope);
+  if (r.ok && !Number.isFinite(r.value_si)) return { ok: false, message: "is too large: not a finite number (infinite)" };
+  return r;
+}
+
+function parameterValue(text: string, scope: Environment["scope"]): ParameterResult {
   if (text.trim() === "") return { ok: false, message: "is empty", at: 0 };
   const { body, bracket } = splitBracketUnit(text);
   if (!bracket) {
