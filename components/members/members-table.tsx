@@ -70,7 +70,7 @@ const columns = helper.columns([
 export function MembersTable({ members }: { members: MemberRow[] }) {
   const table = useTable({ features, columns, data: members, getRowId: (row) => row.userId });
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">Members of this workspace</caption>
         <thead>

@@ -84,7 +84,7 @@ export function MembersView({ workspaceId, workspaceName, currentUserId, canMana
       {!canManage ? (
         <p className="rounded-control border border-rule bg-paper-sunk px-4 py-3 text-sm text-ink-soft">{readOnlyReason}</p>
       ) : null}
-      <Panel title="Members" description={query.data ? `${query.data.members.length} in ${workspaceName}` : undefined}>
+      <Panel title="Current members" description={query.data ? `${query.data.members.length} in ${workspaceName}` : undefined}>
         <FormMessage error={error} />
         {query.isPending ? (
           <p className="text-sm text-muted" role="status">Loading members…</p>

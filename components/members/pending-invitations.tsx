@@ -25,7 +25,7 @@ export function PendingInvitations({ workspaceId, invitations }: { workspaceId: 
   return (
     <div className="flex flex-col gap-3">
       <FormMessage error={error} />
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Pending invitations</caption>
           <thead>

@@ -1,0 +1,60 @@
+"use client";
+// Chart result views: energy flow, traces, engine operating points, and the strategy comparison
+// placeholder for documents that already carry that block.
+import { useMemo } from "react";
+import type { Result } from "@/lib/engine";
+import { flowRows, fullLoadCurve, operatingPoints, traceRows } from "@/lib/client/notebook/chart-data";
+import { Chart } from "@/components/charts/chart";
+import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, TRACES_SPEC } from "@/components/charts/specs";
+import { WithResult } from "./result-state";
+
+export function EnergyFlow() {
+  return <WithResult>{(r) => <FlowBody result={r} />}</WithResult>;
+}
+
+function FlowBody({ result }: { result: Result }) {
+  const datasets = useMemo(() => ({ flow: flowRows(result) }), [result]);
+  return (
+    <>
+      <p className="mb-2 text-sm text-muted">Energy in (left) and where it went (right), kWh over the cycle; equal heights are the ledger closing.</p>
+      <Chart spec={ENERGY_FLOW_SPEC} datasets={datasets} label="Energy flow from sources to road work and losses" />
+    </>
+  );
+}
+
+export function Traces() {
+  return <WithResult>{(r) => <TracesBody result={r} />}</WithResult>;
+}
+
+function TracesBody({ result }: { result: Result }) {
+  const datasets = useMemo(() => ({ traces: traceRows(result) }), [result]);
+  return (
+    <div className="overflow-x-auto">
+      <Chart spec={TRACES_SPEC} datasets={datasets} label="Traces over the cycle: speed, power split, SOC, gear" />
+    </div>
+  );
+}
+
+export function OperatingPoints() {
+  return <WithResult>{(r) => <PointsBody result={r} />}</WithResult>;
+}
+
+function PointsBody({ result }: { result: Result }) {
+  const datasets = useMemo(() => ({ points: operatingPoints(result), curve: fullLoadCurve(result) }), [result]);
+  if (!result.curves.engine_full_load) return <p className="text-sm text-muted">This powertrain has no engine.</p>;
+  return (
+    <>
+      <p className="mb-2 text-sm text-muted">Each dot is one step with the engine running; the line is the full-load torque curve.</p>
+      <Chart spec={OPERATING_POINTS_SPEC} datasets={datasets} label="Engine operating points over the full-load curve" />
+    </>
+  );
+}
+
+export function StrategyComparison() {
+  return (
+    <p className="rounded-control border border-dashed border-rule-strong px-4 py-5 text-sm text-muted">
+      The comparison of rule-based, ECMS and dynamic-programming strategies arrives with the energy-management work.
+      This block will fill in by itself then.
+    </p>
+  );
+}

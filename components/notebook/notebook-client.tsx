@@ -1,0 +1,29 @@
+"use client";
+// Entry of the document page on the client: opens the shared document and renders the notebook.
+// The collaboration URL comes from the server at request time (never baked into the bundle).
+import { useMemo } from "react";
+import type { PowertrainKind } from "@/lib/notebook";
+import { makePresenceUser } from "@/lib/client/notebook/presence";
+import { useCollab } from "@/lib/client/notebook/use-collab";
+import { Notebook } from "./notebook";
+
+export interface NotebookClientProps {
+  workspaceId: string;
+  documentId: string;
+  collabUrl: string | null;
+  role: string;
+  canEdit: boolean;
+  user: { id: string; name: string };
+  name: string;
+  powertrain: PowertrainKind | null;
+}
+
+export function NotebookClient(props: NotebookClientProps) {
+  const user = useMemo(() => makePresenceUser(props.user), [props.user]);
+  const collab = useCollab({ collabUrl: props.collabUrl, documentId: props.documentId, user });
+  if (!collab) return <p className="py-section text-center text-sm text-muted">Opening the document…</p>;
+  return (
+    <Notebook collab={collab} canEdit={props.canEdit} role={props.role} workspaceId={props.workspaceId} documentId={props.documentId}
+      fallbackName={props.name} fallbackPowertrain={props.powertrain} />
+  );
+}
