@@ -8,49 +8,38 @@ const SOC_TOL = 1e-13;
 const MAX_ITER = 60;
 
 /**
- * Step k's feasible SOC interval: {s : sMax(s) ≥ lo_{k+1}} ∩ {s : sMin(s) ≤ hi_{k+1}}, where
- * sMax / sMin are the highest / lowest next SOC over candidates within the battery limits
- * at s (both rise with s). Grid cells holding an end are found by bisection over the grid,
- * the ends inside them on the exact model; the cost-to-go at each end is evaluated there.
- * Returns false when the interval is empty (the terminal window cannot be reached).
+ * Step k's feasible SOC interval, where some candidate within the battery limits lands in
+ * [lo_{k+1}, hi_{k+1}]. Its lower end is where sMax(s) (highest next SOC over candidates
+ * within the limits, rising with s) reaches lo_{k+1}; its upper end where sMin(s) reaches
+ * hi_{k+1}. The grid cells holding the ends come from the finite cells of row k (or, when
+ * no grid point is feasible because the interval lies inside one cell, from a scan of the
+ * grid); the ends inside them are located on the exact model and the cost-to-go evaluated
+ * there. Returns false when no SOC of step k can still meet the terminal window.
  */
 export function locateInterval(t: CandidateTables, bs: BatteryStep, c: CostToGo, k: number, soc: Float64Array, r: StageEval): boolean {
   const m = c.socPoints;
-  const lo1 = c.lo[k + 1] - EDGE_TOL, hi1 = c.hi[k + 1] + EDGE_TOL;
-  const up = (s: number) => (evaluateStage(t, bs, c, k, s, r), r.sMax - lo1); // rises with s
-  const down = (s: number) => (evaluateStage(t, bs, c, k, s, r), hi1 - r.sMin); // falls with s
-  let lo: number;
-  if (up(soc[0]) >= 0) lo = soc[0];
-  else if (!(up(soc[m - 1]) >= 0)) return false;
-  else {
-    const i = firstIndex(m, (j) => up(soc[j]) >= 0);
-    lo = refine(up, soc[i - 1], soc[i]);
-  }
-  let hi: number;
-  if (down(soc[m - 1]) >= 0) hi = soc[m - 1];
-  else if (!(down(soc[0]) >= 0)) return false;
-  else {
-    const i = firstIndex(m, (j) => !(down(soc[j]) >= 0));
-    hi = refine(down, soc[i], soc[i - 1]);
-  }
-  if (!(lo <= hi)) return false;
   const row = k * c.stride;
+  const lo1 = c.lo[k + 1] - EDGE_TOL, hi1 = c.hi[k + 1] + EDGE_TOL;
+  const up = (s: number) => (evaluateStage(t, bs, c, k, s, r), r.sMax - lo1); // -Infinity: no candidate
+  const down = (s: number) => (evaluateStage(t, bs, c, k, s, r), hi1 - r.sMin);
+  let iLo = -1, iHi = -1;
+  for (let i = 0; i < m; i++) if (c.J[row + i] < Infinity) { iLo = i; break; }
+  if (iLo >= 0) {
+    for (let i = m - 1; i >= 0; i--) if (c.J[row + i] < Infinity) { iHi = i; break; }
+  } else {
+    for (let i = 0; i < m && iLo < 0; i++) if (up(soc[i]) >= 0) iLo = i;
+    for (let i = m - 1; i >= 0 && iHi < 0; i--) if (down(soc[i]) >= 0) iHi = i;
+    if (iLo < 0 || iHi < 0) return false;
+  }
+  const lo = iLo === 0 ? soc[0] : refine(up, soc[iLo - 1], soc[iLo]);
+  const hi = iHi === m - 1 ? soc[m - 1] : refine(down, soc[iHi + 1], soc[iHi]);
+  if (!(lo <= hi)) return false;
   c.lo[k] = lo;
   c.hi[k] = hi;
-  c.jLo[k] = lo === soc[0] ? c.J[row] : (evaluateStage(t, bs, c, k, lo, r), r.cost);
-  c.jHi[k] = hi === soc[m - 1] ? c.J[row + m - 1] : (evaluateStage(t, bs, c, k, hi, r), r.cost);
-  return true;
-}
-
-/** Smallest j in 1..m−1 with pred(j) true, given pred(0) false and pred(m−1) true (pred monotone). */
-function firstIndex(m: number, pred: (j: number) => boolean): number {
-  let a = 0, b = m - 1;
-  while (b - a > 1) {
-    const mid = (a + b) >> 1;
-    if (pred(mid)) b = mid;
-    else a = mid;
-  }
-  return b;
+  c.jLo[k] = lo === soc[iLo] ? c.J[row + iLo] : (evaluateStage(t, bs, c, k, lo, r), r.cost);
+  c.jHi[k] = hi === soc[iHi] ? c.J[row + iHi] : (evaluateStage(t, bs, c, k, hi, r), r.cost);
+  // Nothing finite to interpolate from: the window is out of reach in practice.
+  return c.jLo[k] < Infinity || c.jHi[k] < Infinity || c.J[row + iLo] < Infinity;
 }
 
 /**
