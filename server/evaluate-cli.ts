@@ -34,4 +34,10 @@ function main(argv: string[]): void {
   process.stdout.write(JSON.stringify(outcome.result) + "\n");
 }
 
+// A reader that stops early (`| head -c 400`) closes the pipe: that is not an error of ours.
+process.stdout.on("error", (err: NodeJS.ErrnoException) => {
+  if (err.code === "EPIPE") process.exit(0);
+  throw err;
+});
+
 main(process.argv.slice(2));
