@@ -1,0 +1,25 @@
+import type { Metadata } from "next";
+import { can } from "@/lib/authz/policy";
+import { loadWorkspace } from "@/components/workspace/load-workspace";
+import { NotebookClient } from "@/components/notebook/notebook-client";
+
+export const metadata: Metadata = { title: "Scenario" };
+
+export default async function DocumentPage({ params }: { params: Promise<{ workspaceId: string; documentId: string }> }) {
+  const { workspaceId, documentId } = await params;
+  const { user, workspace } = await loadWorkspace(workspaceId, "document.read");
+  // Read per request: the same build runs against the demo's and the tests' collaboration ports.
+  const collabUrl = process.env.COLLAB_URL ?? null;
+  return (
+    <NotebookClient
+      workspaceId={workspaceId}
+      documentId={documentId}
+      collabUrl={collabUrl}
+      role={workspace.role}
+      canEdit={can(workspace.role, "document.edit")}
+      user={{ id: user.id, name: user.name }}
+      name=""
+      powertrain={null}
+    />
+  );
+}

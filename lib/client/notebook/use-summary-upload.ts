@@ -1,0 +1,45 @@
+"use client";
+// After a successful evaluation that follows this person's own edit, send the headline figures
+// to the documents API (at most every THROTTLE_MS) so the documents table can sort by them.
+import { useEffect, useRef } from "react";
+import type * as Y from "yjs";
+import type { Result } from "@/lib/engine";
+import { putSummary, type DocumentSummary } from "./documents-api";
+
+export const THROTTLE_MS = 3000;
+
+export function summaryOf(result: Result): DocumentSummary {
+  const k = result.kpi;
+  const f = (x: number | null) => (x !== null && Number.isFinite(x) ? x : null);
+  return {
+    fuel_l_per_100km: f(k.fuel_l_per_100km), co2_g_per_km: f(k.co2_g_per_km), electric_kwh_per_100km: f(k.electric_kwh_per_100km),
+    soc_initial: f(k.soc_initial), soc_final: f(k.soc_final), feasible: k.feasible,
+  };
+}
+
+export function useSummaryUpload(opts: { doc: Y.Doc; remoteOrigin?: unknown; enabled: boolean; workspaceId: string; documentId: string; result: Result | null; stale: boolean }) {
+  const { doc, enabled, workspaceId, documentId, result, stale } = opts;
+  const localEdit = useRef(false);
+  const lastSent = useRef(0);
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+
+  useEffect(() => {
+    const onUpdate = (_u: Uint8Array, _origin: unknown, _doc: Y.Doc, tr: Y.Transaction) => { if (tr.local) localEdit.current = true; };
+    doc.on("update", onUpdate);
+    return () => doc.off("update", onUpdate);
+  }, [doc]);
+
+  useEffect(() => {
+    if (!enabled || !result || stale || !localEdit.current) return;
+    const send = () => {
+      timer.current = null;
+      localEdit.current = false;
+      lastSent.current = Date.now();
+      putSummary(workspaceId, documentId, summaryOf(result)).catch(() => { localEdit.current = true; });
+    };
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(send, Math.max(0, lastSent.current + THROTTLE_MS - Date.now()));
+  }, [enabled, result, stale, workspaceId, documentId]);
+
+  useEffect(() => () => { if (timer.current) clearTimeout(timer.current); }, []);
+}
