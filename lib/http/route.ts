@@ -12,6 +12,8 @@ import { clientIp } from "./client-ip";
 import { DEFAULT_BODY_LIMIT_BYTES, readJsonBody } from "./body";
 import { HttpError, Unauthorized, Unprocessable } from "./errors";
 import { assertSameOrigin } from "./origin";
+import { tokenPrincipal, type TokenPrincipal } from "@/lib/auth/principal";
+import { runWithTokenScope } from "@/lib/tokens/scope";
 
 export type RouteContext<P> = {
   request: Request;
@@ -39,11 +41,14 @@ export function route<P = Record<string, never>, S extends z.ZodType | undefined
   return async (request, context) => {
     const cookies: SessionCookie[] = [];
     try {
-      if (!SAFE_METHODS.has(request.method)) assertSameOrigin(request);
+      // A bearer token is not sent by browsers on their own, so token requests skip the Origin check.
+      const token = await tokenPrincipal(request);
+      if (!token && !SAFE_METHODS.has(request.method)) assertSameOrigin(request);
       const params = ((await context?.params) ?? {}) as P;
       const body = options.body ? parseBody(options.body, await readJsonBody(request, options.maxBodyBytes ?? DEFAULT_BODY_LIMIT_BYTES)) : undefined;
-      const ctx = makeContext(request, params, cookies);
-      const response = await handler(ctx, body as Body<S>);
+      const ctx = makeContext(request, params, cookies, token);
+      const run = () => handler(ctx, body as Body<S>);
+      const response = token ? await runWithTokenScope(token.scope, run) : await run();
       return withCookies(response, cookies);
     } catch (error) {
       return withCookies(errorResponse(error, request), cookies);
@@ -51,8 +56,8 @@ export function route<P = Record<string, never>, S extends z.ZodType | undefined
   };
 }
 
-function makeContext<P>(request: Request, params: P, cookies: SessionCookie[]): RouteContext<P> {
-  let pending: Promise<CurrentSession | null> | undefined;
+function makeContext<P>(request: Request, params: P, cookies: SessionCookie[], token: TokenPrincipal | null): RouteContext<P> {
+  let pending: Promise<CurrentSession | null> | undefined = token ? Promise.resolve(token.session) : undefined;
   const session = () => {
     pending ??= validateSessionId(readSessionIdFromCookieHeader(request.headers.get("cookie"))).then((r) => {
       if (r.cookie) cookies.push(r.cookie);

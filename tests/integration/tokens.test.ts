@@ -1,0 +1,129 @@
+// Personal API tokens: shown once, stored hashed, scoped to one workspace with a role no higher
+// than the creator's, revocable, last-used time; accepted by POST /api/evaluate and workspace reads.
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import * as tokensRoute from "@/app/api/tokens/route";
+import * as tokenRoute from "@/app/api/tokens/[tokenId]/route";
+import * as evaluateRoute from "@/app/api/evaluate/route";
+import * as workspaceRoute from "@/app/api/workspaces/[workspaceId]/route";
+import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
+import * as invitationsRoute from "@/app/api/workspaces/[workspaceId]/invitations/route";
+import * as memberRoute from "@/app/api/workspaces/[workspaceId]/members/[userId]/route";
+import { eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { apiTokens } from "@/db/schema-api-tokens";
+import { hashApiToken } from "@/lib/tokens/format";
+import { bodyOf, call } from "./support/http";
+import { newUser, newWorkspace, teamWorkspace } from "./support/users";
+
+const scenario = JSON.parse(readFileSync(new URL("../../examples/bev.json", import.meta.url), "utf8"));
+
+async function mint(cookie: string, workspaceId: string, role: string, name = "script") {
+  const res = await call(tokensRoute.POST, "POST", "/api/tokens", { cookie, body: { workspaceId, name, role } });
+  return { res, body: await bodyOf(res) };
+}
+const bearer = (token: string) => ({ authorization: `Bearer ${token}` });
+const evaluate = (token: string) =>
+  call(evaluateRoute.POST, "POST", "/api/evaluate", { body: scenario, headers: bearer(token), origin: null });
+const readWorkspace = (token: string, workspaceId: string) =>
+  call(workspaceRoute.GET, "GET", `/api/workspaces/${workspaceId}`, { headers: bearer(token), params: { workspaceId } });
+
+describe("personal API tokens", () => {
+  it("is shown once, stored only as its SHA-256, and listed without the secret", async () => {
+    const t = await teamWorkspace();
+    const { res, body } = await mint(t.editor.cookie, t.workspaceId, "viewer", "nightly runs");
+    expect(res.status).toBe(201);
+    expect(body.token).toMatch(/^jb_[A-Za-z0-9_-]{43}$/);
+    const rows = await getDb().select().from(apiTokens).where(eq(apiTokens.userId, t.editor.id));
+    expect(rows).toHaveLength(1);
+    expect(rows[0].tokenHash).toBe(hashApiToken(body.token));
+    expect(JSON.stringify(rows[0])).not.toContain(body.token.slice(3));
+    const list = await bodyOf(await call(tokensRoute.GET, "GET", "/api/tokens", { cookie: t.editor.cookie }));
+    expect(list.tokens).toHaveLength(1);
+    expect(list.tokens[0]).toMatchObject({ name: "nightly runs", role: "viewer", workspaceId: t.workspaceId, prefix: body.token.slice(0, 9), lastUsedAt: null, revokedAt: null });
+    expect(JSON.stringify(list)).not.toContain(body.token);
+  });
+
+  it("cannot get a role above its creator's", async () => {
+    const t = await teamWorkspace();
+    const { res, body } = await mint(t.reviewer.cookie, t.workspaceId, "editor");
+    expect(res.status).toBe(422);
+    expect(body.fields.role).toBe("your role in this workspace is reviewer; a token cannot have a higher role");
+    expect((await mint(t.outsider.cookie, t.workspaceId, "viewer")).res.status).toBe(404);
+  });
+
+  it("evaluates a scenario with POST /api/evaluate (no cookie, no Origin) and stamps last_used_at", async () => {
+    const t = await teamWorkspace();
+    const { body } = await mint(t.viewer.cookie, t.workspaceId, "viewer");
+    const res = await evaluate(body.token);
+    expect(res.status).toBe(200);
+    const result = await bodyOf(res);
+    expect(result.kpi.feasible).toBe(true);
+    const [row] = await getDb().select().from(apiTokens).where(eq(apiTokens.tokenHash, hashApiToken(body.token)));
+    expect(row.lastUsedAt).toBeInstanceOf(Date);
+  });
+
+  it("reads its own workspace; another workspace of the same user is 404", async () => {
+    const owner = await newUser("owner");
+    const a = await newWorkspace(owner, "A");
+    const b = await newWorkspace(owner, "B");
+    const { body } = await mint(owner.cookie, a, "viewer");
+    const ok = await readWorkspace(body.token, a);
+    expect(ok.status).toBe(200);
+    expect((await bodyOf(ok)).role).toBe("viewer"); // capped to the token's role, though the user owns A
+    const other = await readWorkspace(body.token, b);
+    expect(other.status).toBe(404);
+    const members = await call(membersRoute.GET, "GET", `/api/workspaces/${b}/members`, { headers: bearer(body.token), params: { workspaceId: b } });
+    expect(members.status).toBe(404);
+  });
+
+  it("is refused for writes and for routes outside its reach (403), even with an owner role", async () => {
+    const owner = await newUser("owner");
+    const ws = await newWorkspace(owner);
+    const { body } = await mint(owner.cookie, ws, "owner");
+    const invite = await call(invitationsRoute.POST, "POST", `/api/workspaces/${ws}/invitations`, {
+      body: { email: "x@example.com", role: "viewer" }, headers: bearer(body.token), params: { workspaceId: ws }, origin: null,
+    });
+    expect(invite.status).toBe(403);
+    expect((await bodyOf(invite)).error).toBe("API tokens are accepted only by POST /api/evaluate and GET requests under /api/workspaces/<id>/");
+    const mintWithToken = await call(tokensRoute.POST, "POST", "/api/tokens", { body: { workspaceId: ws, name: "x", role: "viewer" }, headers: bearer(body.token), origin: null });
+    expect(mintWithToken.status).toBe(403);
+  });
+
+  it("is 401 once revoked, and for unknown or malformed tokens", async () => {
+    const t = await teamWorkspace();
+    const { body } = await mint(t.editor.cookie, t.workspaceId, "editor");
+    expect((await evaluate(body.token)).status).toBe(200);
+    const del = await call(tokenRoute.DELETE, "DELETE", `/api/tokens/${body.item.id}`, { cookie: t.editor.cookie, params: { tokenId: body.item.id } });
+    expect(del.status).toBe(204);
+    const after = await evaluate(body.token);
+    expect(after.status).toBe(401);
+    expect((await bodyOf(after)).error).toBe("this API token has been revoked");
+    expect((await readWorkspace(body.token, t.workspaceId)).status).toBe(401);
+    const unknown = await evaluate("jb_" + "A".repeat(43));
+    expect((await bodyOf(unknown)).error).toBe("this API token is not valid");
+    const malformed = await call(evaluateRoute.POST, "POST", "/api/evaluate", { body: scenario, headers: { authorization: "Bearer nope" }, origin: null });
+    expect(malformed.status).toBe(401);
+    // someone else cannot revoke it (404, no hint that it exists)
+    const { body: other } = await mint(t.viewer.cookie, t.workspaceId, "viewer");
+    const foreign = await call(tokenRoute.DELETE, "DELETE", `/api/tokens/${other.item.id}`, { cookie: t.editor.cookie, params: { tokenId: other.item.id } });
+    expect(foreign.status).toBe(404);
+  });
+
+  it("follows its creator: demoted below the token's role caps it, removed from the workspace ends it", async () => {
+    const t = await teamWorkspace();
+    const { body } = await mint(t.editor.cookie, t.workspaceId, "editor");
+    const demote = await call(memberRoute.PATCH, "PATCH", `/api/workspaces/${t.workspaceId}/members/${t.editor.id}`, {
+      cookie: t.owner.cookie, body: { role: "viewer" }, params: { workspaceId: t.workspaceId, userId: t.editor.id },
+    });
+    expect(demote.status).toBe(200);
+    expect((await bodyOf(await readWorkspace(body.token, t.workspaceId))).role).toBe("viewer");
+    const remove = await call(memberRoute.DELETE, "DELETE", `/api/workspaces/${t.workspaceId}/members/${t.editor.id}`, {
+      cookie: t.owner.cookie, params: { workspaceId: t.workspaceId, userId: t.editor.id },
+    });
+    expect(remove.status).toBe(204);
+    const gone = await readWorkspace(body.token, t.workspaceId);
+    expect(gone.status).toBe(401);
+    expect((await bodyOf(gone)).error).toBe("this API token's creator is no longer a member of its workspace");
+  });
+});
