@@ -1,5 +1,5 @@
 import { EMPTY_ENV, evaluateValue, splitBracketUnit, type Environment, type ValueSpec } from "./expressions";
-import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, unknownUnitMessage, type UnitDef } from "./units";
+import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, toSI, unknownUnitMessage, type UnitDef } from "./units";
 
 /**
  * List syntax: items separated by commas, semicolons, tabs or new lines (commas inside
@@ -10,6 +10,8 @@ import { findUnit, fromSI, mismatchMessage, normaliseSymbols, parseMeasured, unk
  */
 export const LIST_MAX_ITEMS = 20_000;
 
+const PLAIN_NUMBER = /^[-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?$/;
+
 export type ListResult =
   | { ok: true; values: number[]; values_si: number[] }
   | { ok: false; message: string; at?: number; index?: number };
@@ -19,21 +21,27 @@ interface Item {
   at: number;
 }
 
+const SEPARATORS = new Set([",", ";", "\t", "\n", "\r"]);
+
 export function splitList(text: string): Item[] {
   const items: Item[] = [];
   let depth = 0;
   let start = 0;
-  for (let i = 0; i <= text.length; i++) {
-    const ch = text.charAt(i);
+  const push = (end: number) => {
+    const raw = text.slice(start, end);
+    const trimmed = raw.trim();
+    if (trimmed !== "") items.push({ text: trimmed, at: start + (raw.length - raw.trimStart().length) });
+  };
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
     if (ch === "(") depth++;
-    if (ch === ")") depth--;
-    if (i === text.length || (depth <= 0 && /[,;\t\n\r]/.test(ch))) {
-      const raw = text.slice(start, i);
-      const lead = raw.length - raw.trimStart().length;
-      if (raw.trim() !== "") items.push({ text: raw.trim(), at: start + lead });
+    else if (ch === ")") depth--;
+    else if (depth <= 0 && SEPARATORS.has(ch)) {
+      push(i);
       start = i + 1;
     }
   }
+  push(text.length);
   return items;
 }
 
@@ -59,14 +67,22 @@ export function parseList(written: string, spec: ValueSpec, env: Environment = E
   if (lu.unit && lu.unit.quantity !== spec.quantity) {
     return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, lu.unit.symbol, lu.unit.quantity) };
   }
-  const items = splitList(lu.body);
+  const items = lu.body === text ? first : splitList(lu.body);
   if (items.length > LIST_MAX_ITEMS) return { ok: false, message: `too many items (${items.length}; the limit is ${LIST_MAX_ITEMS})` };
   const itemSpec: ValueSpec = { ...spec, unit: lu.unit ? lu.unit.symbol : spec.unit };
   const fieldUnit = spec.unit === "" ? undefined : findUnit(spec.unit);
   const values: number[] = [];
   const values_si: number[] = [];
+  // fast path for long sample lists: a bare number needs no parser
+  const itemUnit = itemSpec.unit === "" ? undefined : findUnit(itemSpec.unit);
+  const bare = (text: string) => {
+    if (itemSpec.integer || !PLAIN_NUMBER.test(text)) return undefined;
+    const value = Number(text);
+    const value_si = itemUnit ? toSI(value, itemUnit) : value;
+    return Number.isFinite(value_si) ? { ok: true as const, value, value_si } : undefined;
+  };
   for (const [index, item] of items.entries()) {
-    const r = evaluateValue(item.text, itemSpec, env);
+    const r = bare(item.text) ?? evaluateValue(item.text, itemSpec, env);
     if (!r.ok) return { ok: false, message: `item ${index + 1}: ${r.message}`, at: item.at + (r.at ?? 0), index };
     values_si.push(r.value_si);
     const same = itemSpec.unit === spec.unit;
