@@ -111,6 +111,7 @@ export function evaluateScenario(s: Scenario, options: EvaluateOptions = {}): Ev
   const cs = chargeSustainingWarning(s, run.ledger, socInitial, run.socFinal);
   if (cs) findings.push(cs);
   findings.push(...socPinnedWarnings(s, run.traces.soc, run.socFinal), ...unusedBlockWarnings(s), ...parameterWarnings(s));
+  findings.push(...(made.strategy.findings?.(run) ?? []));
   const e = s.powertrain === "bev" ? undefined : s.engine;
   const result: Result = {
     format: RESULT_FORMAT_V1,

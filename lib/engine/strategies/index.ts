@@ -7,15 +7,15 @@ import type { Strategy } from "./strategy";
 import { FixedStrategy } from "./fixed";
 import { ThermostatStrategy } from "./thermostat";
 import { ParallelRuleStrategy } from "./parallel-rule";
+import { makeOptimisingStrategy } from "./optimising";
 
 export type { Strategy } from "./strategy";
 
 export type StrategyOutcome = { ok: true; strategy: Strategy } | { ok: false; kind: string; reason: string };
 
 /**
- * Builds the energy manager named by the scenario. Kinds the schema accepts but this
- * build does not implement yet ('ecms', 'dp') come back as a clear refusal; issue 4 adds
- * them here.
+ * Builds the energy manager named by the scenario (ECMS and DP: strategies/optimising.ts).
+ * A kind that does not fit the powertrain comes back as a clear refusal.
  */
 export function makeStrategy(s: Scenario, plant: Plant): StrategyOutcome {
   const spec = s.strategy;
@@ -35,5 +35,7 @@ export function makeStrategy(s: Scenario, plant: Plant): StrategyOutcome {
       }),
     };
   }
+  const optimising = makeOptimisingStrategy(spec, plant);
+  if (optimising) return { ok: true, strategy: optimising };
   return { ok: false, kind: spec.kind, reason: `strategy '${spec.kind}' is not available yet for powertrain '${plant.powertrain}'` };
 }

@@ -1,3 +1,6 @@
+import type { Run } from "../simulate";
+import type { Finding } from "../findings";
+
 /**
  * An energy manager: at step k, from SOC `soc`, choose a control and write it to
  * ctl[0] = mode, ctl[1] = value (see plants/plant.ts). A strategy may keep its own state
@@ -9,4 +12,6 @@ export interface Strategy {
   readonly kind: string;
   reset(socInitial: number): void;
   decide(k: number, soc: number, ctl: Float64Array): void;
+  /** Findings about the strategy itself after a run (e.g. DP: terminal window missed, grid too coarse). */
+  findings?(run: Run): Finding[];
 }

@@ -1,10 +1,7 @@
 import type { Plant } from "../../plants/plant";
 import type { Battery } from "../../models/battery";
 import type { ElectricMachine } from "../../models/electric-machine";
-import {
-  S_BATT_TERMINAL_W, S_DEMANDED, S_FUEL_W, S_GENERATOR_POWER_W, S_UNMET_W, S_VIOLATIONS, V_BATTERY_POWER,
-  newStepScratch,
-} from "../../step-output";
+import { S_FUEL_W, S_GENERATOR_POWER_W, S_UNMET_W, S_VIOLATIONS, newStepScratch } from "../../step-output";
 
 /** Violation bits that do not depend on SOC: engine torque/speed, motor torque/speed, generator power. */
 export const HARDWARE_BITS = 0b11111;
@@ -25,7 +22,7 @@ export interface HybridPlant extends Plant {
 
 /**
  * Per (step, candidate) quantities that do not depend on SOC, computed once per cycle with
- * the plant's own exact step model (plant.apply at a reference SOC):
+ * the plant's own exact step model without the battery (plant.drive):
  *   fuel power, battery terminal (bus) power, unmet power, hardware violations.
  * Only eligible candidates are stored, compacted: step k owns slots [start[k], start[k+1]).
  * While braking the bus power depends on SOC through the charge limit (DESIGN §4: the motor
@@ -89,19 +86,15 @@ export function buildCandidateTables(plant: HybridPlant, controlPoints: number):
     let anyClean = false;
     for (let j = 0; j < count; j++) {
       plant.candidate(k, j, controlPoints, ctl);
-      plant.apply(k, socRef, ctl[0], ctl[1], out);
+      plant.drive(k, socRef, ctl[0], ctl[1], out);
       if ((out[S_VIOLATIONS] & HARDWARE_BITS) === 0) { anyClean = true; break; }
     }
     hardwareLimited[k] = anyClean ? 0 : 1;
     for (let j = 0; j < count; j++) {
       plant.candidate(k, j, controlPoints, ctl);
-      plant.apply(k, socRef, ctl[0], ctl[1], out);
-      const mask = out[S_VIOLATIONS];
-      if (anyClean && (mask & HARDWARE_BITS) !== 0) continue;
-      // Battery power before any P_max clamp at the reference SOC (the clamp depends on SOC).
-      const battClamped = (mask & (1 << V_BATTERY_POWER)) !== 0;
-      const bus = battClamped ? out[S_DEMANDED + 2 * V_BATTERY_POWER] : out[S_BATT_TERMINAL_W];
-      const unmet = battClamped ? out[S_UNMET_W] - (bus - out[S_BATT_TERMINAL_W]) : out[S_UNMET_W];
+      const bus = plant.drive(k, socRef, ctl[0], ctl[1], out);
+      if (anyClean && (out[S_VIOLATIONS] & HARDWARE_BITS) !== 0) continue;
+      const unmet = out[S_UNMET_W];
       index[slot] = j;
       fuel_w[slot] = out[S_FUEL_W];
       stage_j[slot] = (out[S_FUEL_W] + (anyClean ? 0 : UNMET_WEIGHT * unmet)) * d.dt_s;
