@@ -74,7 +74,7 @@ export function evaluateValue(written: string, spec: ValueSpec, env: Environment
 
 function literalValue(m: Measured, spec: ValueSpec, fieldUnit: UnitDef): ValueResult {
   if (m.unit.quantity !== spec.quantity) {
-    return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, m.unit.symbol || "a pure number", m.unit.quantity), at: 0 };
+    return { ok: false, message: mismatchMessage(spec.unit, spec.quantity, m.unit.symbol || "a pure number", m.unit.quantity), at: m.unit_at ?? 0 };
   }
   // the number as written when the units agree: no round-off from a conversion
   const value = m.unit === fieldUnit ? m.value : fromSI(m.value_si, fieldUnit);

@@ -69,6 +69,8 @@ export interface Measured {
   value: number;
   unit: UnitDef;
   value_si: number;
+  /** index of the unit in the text (for messages), absent for a bare number */
+  unit_at?: number;
 }
 
 export type ParseMeasured =
@@ -92,13 +94,13 @@ export function parseMeasured(text: string, bareUnit: UnitDef): ParseMeasured {
   if (!/^\s*[A-Za-z%ΩΩµ°]/.test(rest)) return { ok: false, notLiteral: true };
   const unitText = rest.trim();
   const unit = findUnit(unitText);
-  if (unit) return measured(Number(num[0]), unit);
+  if (unit) return measured(Number(num[0]), unit, lead + num[0].length + (rest.length - rest.trimStart().length));
   if (/[()+\-*^,[\]<>=]/.test(unitText)) return { ok: false, notLiteral: true };
   const at = lead + num[0].length + (rest.length - rest.trimStart().length);
   const hint = /^[A-Za-z_]\w*$/.test(unitText) && !suggestion(unitText) ? ` (for a product write ${num[0]} * ${unitText})` : "";
   return { ok: false, message: unknownUnitMessage(unitText) + hint, at };
 }
 
-function measured(value: number, unit: UnitDef): ParseMeasured {
-  return { ok: true, measured: { value, unit, value_si: toSI(value, unit) } };
+function measured(value: number, unit: UnitDef, unit_at?: number): ParseMeasured {
+  return { ok: true, measured: { value, unit, value_si: toSI(value, unit), unit_at } };
 }

@@ -93,7 +93,8 @@ describe("messages attach to block and field", () => {
     const id = idOf(doc, "battery_pack");
     setParam(doc, id, "capacity", "15 kWh");
     expect(errors(doc)).toEqual([{
-      blockId: id, field: "capacity", severity: "error", at: 0,
+      // at: the unit in "15 kWh"
+      blockId: id, field: "capacity", severity: "error", at: 3,
       text: "Battery pack › capacity: expected Ah (charge), got kWh (energy)",
     }]);
   });
