@@ -29,7 +29,7 @@ export function valueAt(input: unknown, parts: readonly PathPart[]): unknown {
 
 export function showValue(value: unknown): string {
   if (value === undefined) return "nothing";
-  if (typeof value === "number") return Number.isFinite(value) ? String(value) : String(value);
+  if (typeof value === "number") return String(value); // NaN and Infinity print as such
   if (Array.isArray(value)) {
     const head = value.slice(0, 6).map((v) => (typeof v === "number" ? String(v) : JSON.stringify(v)));
     return `[${head.join(", ")}${value.length > 6 ? `, … (${value.length} items)` : ""}]`;

@@ -4,8 +4,12 @@ import { parseScenario, type Scenario } from "@/lib/engine";
 
 export const POWERTRAINS = ["conventional", "bev", "parallel", "series"] as const;
 
-/** The raw JSON of examples/<name>.json (a fresh copy each call, safe to mutate). */
-export function example(name: string): Record<string, unknown> & { [k: string]: any } {
+/**
+ * The raw JSON of examples/<name>.json (a fresh copy each call, safe to mutate). Typed
+ * loosely on purpose: tests reach into it to break fields in every possible way.
+ */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export function example(name: string): Record<string, any> {
   const path = fileURLToPath(new URL(`../../../examples/${name}.json`, import.meta.url));
   return JSON.parse(readFileSync(path, "utf8"));
 }
