@@ -65,6 +65,13 @@ const ATTEMPTS: [string, RegExp][] = [
   ["hasOwnProperty", /unknown name "hasOwnProperty"/],
   ["sqrt", /unknown name "sqrt"|must be called/],
   ["min", /must be called/],
+  ["1.constructor", /unknown unit "constructor"/],
+  ["(1).constructor", /member access/],
+  ["x\n.constructor", /member access/],
+  ['x["constructor"]', /unknown unit/],
+  ["2.toString()", /unexpected text/],
+  ["x?.y", /member access/],
+  ["0x10", /unknown unit "x10"/],
 ];
 
 describe("injection attempts are refused with a message", () => {
