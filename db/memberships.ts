@@ -53,12 +53,16 @@ export async function deleteMembership(args: { workspaceId: string; userId: stri
     .where(and(eq(memberships.workspaceId, args.workspaceId), eq(memberships.userId, args.userId)));
 }
 
-/** Owner user ids, locked FOR UPDATE so two concurrent demotions cannot both pass the last-owner check. */
+/**
+ * Owner user ids of the workspace, read after locking the workspace row FOR UPDATE: every
+ * membership change takes that one lock first, so concurrent changes run one after another
+ * (no deadlock between row locks taken in different orders) and the last-owner check holds.
+ */
 export async function lockOwners(args: { workspaceId: string; tx: Tx }): Promise<string[]> {
+  await args.tx.select({ id: workspaces.id }).from(workspaces).where(eq(workspaces.id, args.workspaceId)).for("update");
   const rows = await args.tx
     .select({ userId: memberships.userId })
     .from(memberships)
-    .where(and(eq(memberships.workspaceId, args.workspaceId), eq(memberships.role, "owner")))
-    .for("update");
+    .where(and(eq(memberships.workspaceId, args.workspaceId), eq(memberships.role, "owner")));
   return rows.map((r) => r.userId);
 }

@@ -1,5 +1,5 @@
 // Workspace creation, members, role changes, removal, leaving — with the last-owner rule.
-import { getDb } from "@/db/pool";
+import { getDb, type Tx } from "@/db/pool";
 import { deleteMembership, getMembership, listMembers, lockOwners, setMembershipRole, type Member } from "@/db/memberships";
 import { createWorkspaceWithOwner, getWorkspace, type Workspace } from "@/db/workspaces";
 import { authorizeWorkspace, can, canGrantRole, isUuid, type Role } from "@/lib/authz";
@@ -28,11 +28,15 @@ export async function readMembers(args: { userId: string; workspaceId: string })
 }
 
 export async function changeMemberRole(args: { actorId: string; workspaceId: string; userId: string; role: Role }): Promise<Member> {
-  const actor = await authorizeWorkspace({ userId: args.actorId, workspaceId: args.workspaceId, action: "members.manage" });
-  if (!canGrantRole(actor.role, args.role)) throw new Forbidden("only owners can grant the owner role");
+  const check = async (tx?: Tx) => {
+    const actor = await authorizeWorkspace({ userId: args.actorId, workspaceId: args.workspaceId, action: "members.manage", tx });
+    if (!canGrantRole(actor.role, args.role)) throw new Forbidden("only owners can grant the owner role");
+  };
+  await check();
   if (!isUuid(args.userId)) throw new NotFound("member not found");
   await getDb().transaction(async (tx) => {
     const owners = await lockOwners({ workspaceId: args.workspaceId, tx });
+    await check(tx); // again under the lock: the actor's own role may have just changed
     const target = await getMembership({ workspaceId: args.workspaceId, userId: args.userId, tx });
     if (!target) throw new NotFound("member not found");
     if (target.role === "owner" && args.role !== "owner" && owners.length <= 1) throw new Conflict("the last owner cannot be demoted");
@@ -46,10 +50,12 @@ export async function changeMemberRole(args: { actorId: string; workspaceId: str
 /** An owner removes anyone; any member may remove themselves (leave). The last owner stays. */
 export async function removeMember(args: { actorId: string; workspaceId: string; userId: string }): Promise<void> {
   const leaving = args.actorId === args.userId;
-  await authorizeWorkspace({ userId: args.actorId, workspaceId: args.workspaceId, action: leaving ? "workspace.read" : "members.manage" });
+  const action = leaving ? "workspace.read" : "members.manage";
+  await authorizeWorkspace({ userId: args.actorId, workspaceId: args.workspaceId, action });
   if (!isUuid(args.userId)) throw new NotFound("member not found");
   await getDb().transaction(async (tx) => {
     const owners = await lockOwners({ workspaceId: args.workspaceId, tx });
+    await authorizeWorkspace({ userId: args.actorId, workspaceId: args.workspaceId, action, tx }); // again under the lock
     const target = await getMembership({ workspaceId: args.workspaceId, userId: args.userId, tx });
     if (!target) throw new NotFound("member not found");
     if (target.role === "owner" && owners.length <= 1)

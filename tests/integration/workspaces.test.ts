@@ -230,6 +230,8 @@ describe("the last owner", () => {
     expect(members).toHaveLength(1);
   });
 
+  // Whichever runs second finds either no owner right left (403: it was demoted first) or
+  // itself the last owner's demoter (409); never both demoted.
   it("two owners demoting each other at the same time leave one owner", async () => {
     const t = await teamWorkspace();
     await patchRole(t.owner, t.workspaceId, t.editor.id, "owner");
@@ -237,7 +239,9 @@ describe("the last owner", () => {
       patchRole(t.owner, t.workspaceId, t.editor.id, "viewer"),
       patchRole(t.editor, t.workspaceId, t.owner.id, "viewer"),
     ]);
-    expect([a.status, b.status].sort()).toEqual([200, 409]);
+    const statuses = [a.status, b.status].sort();
+    expect(statuses[0]).toBe(200);
+    expect([403, 409]).toContain(statuses[1]);
     const owners = await getDb().select().from(memberships).where(and(eq(memberships.workspaceId, t.workspaceId), eq(memberships.role, "owner")));
     expect(owners).toHaveLength(1);
   });
