@@ -14,10 +14,17 @@ export type { CompileMessage, Source, SourceTable } from "./compile-types";
 
 export const SCENARIO_FORMAT = "joulebook.scenario/1";
 
+/** A drive cycle from the workspace library, as a resolver hands it to compile. */
+export type LibraryCycle = { dt_s: number; speed_kmh: number[]; grade_pct?: number[] };
+/** Looks up a library id (loaded beforehand: compile stays pure and synchronous); a string says why it cannot be used. */
+export type LibraryResolver = (id: string) => LibraryCycle | string;
+
 export interface CompileInput {
   name: string;
   powertrain: PowertrainKind | null;
   blocks: readonly BlockSnapshot[];
+  /** Optional: without it a drive-cycle block whose source is the library is an error. */
+  resolveLibrary?: LibraryResolver;
 }
 
 export interface CompileResult {
@@ -76,17 +83,28 @@ function compileParameters(blocks: readonly BlockSnapshot[], messages: CompileMe
   return set;
 }
 
-function compileCycle(block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext): void {
+function compileCycle(block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, resolve?: LibraryResolver): void {
   const source = (block.params.source ?? "standard").trim() || "standard";
   const err = (field: string, text: string) => {
     ctx.messages.push({ blockId: block.id, field, severity: "error", text: `${fieldLabel("drive_cycle", field)}: ${text}` });
     ctx.failed.add("cycle");
   };
+  if (source === "library" && resolve) return compileLibraryCycle(block, scenario, ctx, resolve, err);
   if (source === "library") return err("library_id", "cycles from the library are not available yet; choose a standard cycle or your own samples");
   if (source !== "standard" && source !== "custom") return err("source", `"${source}" is not one of standard, custom, library`);
   if (source === "custom" && (block.params.dt ?? "").trim() === "") return err("dt", "is empty (own speed samples need their time step)");
   scenario.cycle = {};
   compileFields(block, scenario, ctx, ["source", "library_id"]);
+}
+
+function compileLibraryCycle(block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, resolve: LibraryResolver,
+  err: (field: string, text: string) => void): void {
+  const id = (block.params.library_id ?? "").trim();
+  if (id === "") return err("library_id", "is empty; choose a cycle from the workspace library");
+  const found = resolve(id);
+  if (typeof found === "string") return err("library_id", found);
+  scenario.cycle = found.grade_pct ? { dt_s: found.dt_s, speed_kmh: found.speed_kmh, grade_pct: found.grade_pct } : { dt_s: found.dt_s, speed_kmh: found.speed_kmh };
+  ctx.sources.set("cycle", { blockId: block.id, kind: "drive_cycle", field: "library_id" });
 }
 
 export function compile(input: CompileInput): CompileResult {
@@ -114,7 +132,7 @@ export function compile(input: CompileInput): CompileResult {
       messages.push({ blockId: block.id, severity: "warning", text: `${BLOCK_TITLES[kind]}: not used by the ${POWERTRAIN_LABELS[pt]}` });
       continue;
     }
-    if (kind === "drive_cycle") compileCycle(block, scenario, ctx);
+    if (kind === "drive_cycle") compileCycle(block, scenario, ctx, input.resolveLibrary);
     else compileSection(kind, block, scenario, ctx, pt);
   }
   const blockOfKind = new Map([...chosen].map(([k, b]) => [k, b.id]));
