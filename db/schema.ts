@@ -117,3 +117,4 @@ export const outboxMessages = pgTable(
   (t) => [index("outbox_messages_received_idx").on(t.receivedAt)],
 );
 export * from "./schema-api-tokens";
+export * from "./schema-documents";
