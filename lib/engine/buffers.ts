@@ -9,9 +9,10 @@ export function f64Views(n: number, count: number): Float64Array[] {
   return views;
 }
 
-/** A plain number array of length n filled with zeros (packed doubles once written). */
-export function zeros(n: number): number[] {
-  const a = new Array<number>(n);
-  for (let i = 0; i < n; i++) a[i] = 0;
-  return a;
+/**
+ * A plain number array of length n for a trace that the caller fills completely, in
+ * order (no pre-fill: every element is written before the array leaves the engine).
+ */
+export function traceArray(n: number): number[] {
+  return new Array<number>(n);
 }

@@ -2,7 +2,7 @@ import type { Plant } from "./plants/plant";
 import type { Strategy } from "./strategies/strategy";
 import { SINK_KEYS, SUPPLY_KEYS, type Ledger, type LedgerKey } from "./ledger";
 import { EpisodeTracker } from "./episodes";
-import { zeros } from "./buffers";
+import { traceArray } from "./buffers";
 import {
   S_AUX_W, S_BATT_CURRENT_A, S_BATT_OCV_V, S_BATT_TERMINAL_W, S_BATTERY_LOSS_W, S_BRAKES_W, S_CLUTCH_W,
   S_DRIVELINE_W, S_ENGINE_LOSS_W, S_ENGINE_ON, S_ENGINE_POWER_W, S_ENGINE_SPEED_RAD_S, S_ENGINE_TORQUE_NM,
@@ -41,9 +41,9 @@ export interface Run {
 /** Plain arrays: they go into the Result as they are, with no copy. */
 function allocTraces(n: number): RunTraces {
   return {
-    engine_on: zeros(n), engine_power_w: zeros(n), engine_speed_rad_s: zeros(n), engine_torque_nm: zeros(n),
-    motor_power_w: zeros(n), motor_torque_nm: zeros(n), generator_power_w: zeros(n), battery_power_w: zeros(n),
-    battery_current_a: zeros(n), brake_power_w: zeros(n), soc: zeros(n), fuel_w: zeros(n),
+    engine_on: traceArray(n), engine_power_w: traceArray(n), engine_speed_rad_s: traceArray(n), engine_torque_nm: traceArray(n),
+    motor_power_w: traceArray(n), motor_torque_nm: traceArray(n), generator_power_w: traceArray(n), battery_power_w: traceArray(n),
+    battery_current_a: traceArray(n), brake_power_w: traceArray(n), soc: traceArray(n), fuel_w: traceArray(n),
   };
 }
 
@@ -54,7 +54,7 @@ function allocTraces(n: number): RunTraces {
  */
 function allocStepLedger(n: number): Record<LedgerKey, number[]> {
   const out = {} as Record<LedgerKey, number[]>;
-  for (const key of [...SUPPLY_KEYS, ...SINK_KEYS]) out[key] = zeros(n);
+  for (const key of [...SUPPLY_KEYS, ...SINK_KEYS]) out[key] = traceArray(n);
   return out;
 }
 
