@@ -1,6 +1,8 @@
 // Authorization matrix: every workspace route × every kind of caller. The expected statuses are
 // written out here from the product rules (DESIGN §1: owners manage members; everyone in the
 // workspace reads it; non-members learn nothing: 404; signed out: 401) — not derived from lib/authz.
+// Adding a route under app/api/workspaces/[workspaceId]? Add a RouteCase to ROUTES with the status
+// each caller must get; the last test fails while any exported handler there is missing.
 import { describe, expect, it } from "vitest";
 import * as invitationIdRoute from "@/app/api/workspaces/[workspaceId]/invitations/[invitationId]/route";
 import * as invitationsRoute from "@/app/api/workspaces/[workspaceId]/invitations/route";
