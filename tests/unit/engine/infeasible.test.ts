@@ -14,6 +14,11 @@ function expectNoNaN(r: Result): void {
   // JSON turns NaN/Infinity into null; walk both the object and its round trip.
   for (const [path, v] of walkNumbers(r)) if (!Number.isFinite(v)) throw new Error(`${path} = ${v}`);
   expect(walkNumbers(back).length).toBe(walkNumbers(r).length);
+  // every trace is dense: one finite number per step (no holes, which JSON would turn into null)
+  for (const [name, arr] of Object.entries(r.traces)) {
+    expect(arr.length, name).toBe(r.cycle.steps);
+    for (let k = 0; k < arr.length; k++) if (typeof arr[k] !== "number" || !Number.isFinite(arr[k])) throw new Error(`${name}[${k}] = ${arr[k]}`);
+  }
 }
 
 describe("a powertrain that cannot follow the cycle", () => {
