@@ -118,3 +118,4 @@ export const outboxMessages = pgTable(
 );
 export * from "./schema-api-tokens";
 export * from "./schema-documents";
+export * from "./schema-versions";
