@@ -1,6 +1,6 @@
 // Charts for export, built from a Result: vega-lite specs with the data inline and a fixed size
 // (no container to measure on the server). Ours in design; no spec ever comes from a request.
-import type { TopLevelSpec } from "vega-lite";
+import type { Config, TopLevelSpec } from "vega-lite";
 import { SINK_KEYS, type Result } from "@/lib/engine";
 import { ELECTRIC, FUEL, INK, LOSS, MUTED, ROAD, RULE } from "@/components/charts/theme";
 
@@ -9,13 +9,13 @@ export type ExportChart = (typeof EXPORT_CHARTS)[number];
 
 /** Shipped fonts are woff2, which the PNG rasteriser cannot read; DejaVu Sans is a system font on these machines. */
 const FONT = "DejaVu Sans, Inter, Helvetica, Arial, sans-serif";
-const CONFIG = {
+const CONFIG: Config = {
   background: "#fcfaf5",
   font: FONT,
   view: { stroke: null },
   axis: { labelColor: MUTED, titleColor: INK, gridColor: RULE, domainColor: RULE, tickColor: RULE, labelFontSize: 11, titleFontSize: 11, titleFontWeight: 600 },
   legend: { labelColor: INK, labelFontSize: 11 },
-  title: { color: INK, fontSize: 13, anchor: "start" as const },
+  title: { color: INK, fontSize: 13, anchor: "start" },
 };
 
 const WIDTH = 720;
