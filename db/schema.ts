@@ -119,3 +119,4 @@ export const outboxMessages = pgTable(
 export * from "./schema-api-tokens";
 export * from "./schema-documents";
 export * from "./schema-versions";
+export * from "./schema-library";
