@@ -21,10 +21,13 @@ export const ACTIONS = [
   "comment.resolve",
   "review.request",
   "review.verdict",
+  "library.read",
+  "library.write",
+  "library.delete",
 ] as const;
 export type Action = (typeof ACTIONS)[number];
 
-const READ: Action[] = ["workspace.read", "members.read", "document.read", "version.read", "comment.read"];
+const READ: Action[] = ["workspace.read", "members.read", "document.read", "version.read", "comment.read", "library.read"];
 const GRANTS: Record<Role, ReadonlySet<Action>> = {
   owner: new Set(ACTIONS),
   editor: new Set([
@@ -36,6 +39,8 @@ const GRANTS: Record<Role, ReadonlySet<Action>> = {
     "comment.write",
     "comment.resolve",
     "review.request",
+    "library.write",
+    "library.delete",
   ]),
   // Reviewers read, comment and give verdicts; they never edit.
   reviewer: new Set([...READ, "comment.write", "comment.resolve", "review.verdict"]),
