@@ -36,10 +36,15 @@ function setTerminal(c: CostToGo, o: BackwardOptions): void {
   c.jHi[c.n] = 0;
 }
 
+/**
+ * No SOC of step k can meet the window. The row is infinite; the interval keeps the next
+ * step's (ultimately the terminal window) so that the forward pass can still steer towards
+ * it and land as close as the limits allow, which the findings then report.
+ */
 function markEmpty(c: CostToGo, k: number): void {
   c.J.fill(Infinity, k * c.stride, (k + 1) * c.stride);
-  c.lo[k] = Infinity;
-  c.hi[k] = -Infinity;
+  c.lo[k] = c.lo[k + 1];
+  c.hi[k] = c.hi[k + 1];
   c.jLo[k] = Infinity;
   c.jHi[k] = Infinity;
 }

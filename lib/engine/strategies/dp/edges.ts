@@ -24,15 +24,23 @@ export function locateInterval(t: CandidateTables, bs: BatteryStep, c: CostToGo,
   const down = (s: number) => (evaluateStage(t, bs, c, k, s, r), hi1 - r.sMin);
   let iLo = -1, iHi = -1;
   for (let i = 0; i < m; i++) if (c.J[row + i] < Infinity) { iLo = i; break; }
+  let lo: number, hi: number;
   if (iLo >= 0) {
     for (let i = m - 1; i >= 0; i--) if (c.J[row + i] < Infinity) { iHi = i; break; }
+    lo = iLo === 0 ? soc[0] : refine(up, soc[iLo - 1], soc[iLo]);
+    hi = iHi === m - 1 ? soc[m - 1] : refine(down, soc[iHi + 1], soc[iHi]);
   } else {
+    // No feasible grid point: the interval, if any, lies inside one cell, or the grid points
+    // around it have no eligible candidate at all (e.g. at soc_min at standstill).
     for (let i = 0; i < m && iLo < 0; i++) if (up(soc[i]) >= 0) iLo = i;
-    for (let i = m - 1; i >= 0 && iHi < 0; i--) if (down(soc[i]) >= 0) iHi = i;
-    if (iLo < 0 || iHi < 0) return false;
+    if (iLo < 0) return false;
+    lo = iLo === 0 ? soc[0] : refine(up, soc[iLo - 1], soc[iLo]);
+    if (!(down(lo) >= 0)) return false;
+    for (let i = m - 1; i >= iLo && iHi < 0; i--) if (down(soc[i]) >= 0) iHi = i;
+    if (iHi < 0) hi = refine(down, soc[iLo], lo);
+    else hi = iHi === m - 1 ? soc[m - 1] : refine(down, soc[iHi + 1], soc[iHi]);
+    if (iHi < 0) iHi = iLo; // for the value lookup below: hi lies in the cell below soc[iLo]
   }
-  const lo = iLo === 0 ? soc[0] : refine(up, soc[iLo - 1], soc[iLo]);
-  const hi = iHi === m - 1 ? soc[m - 1] : refine(down, soc[iHi + 1], soc[iHi]);
   if (!(lo <= hi)) return false;
   c.lo[k] = lo;
   c.hi[k] = hi;
