@@ -70,25 +70,38 @@ const seriesColor = {
   legend: { orient: "bottom", direction: "horizontal" },
 } as const;
 
-/** Traces: small multiples over time sharing the time axis, one panel per quantity. */
-export const TRACES_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  data: { name: "traces" },
-  facet: { row: { field: "panel", type: "nominal", title: null, sort: ["Speed (km/h)", "Power (kW)", "SOC (%)", "Gear"], header: { labelAngle: 0, labelAlign: "left", labelAnchor: "start", labelOrient: "top" } } },
-  spacing: 10,
-  resolve: { scale: { y: "independent" } },
-  spec: {
-    width: 640,
-    height: 90,
-    mark: { type: "line", strokeWidth: 1.2, interpolate: "step-after" },
-    encoding: {
-      x: { field: "t", type: "quantitative", title: "time (s)" },
-      y: { field: "value", type: "quantitative", title: null },
-      color: seriesColor,
-    },
-  },
-} as VisualizationSpec;
+export interface TracePanel {
+  /** dataset name */
+  id: string;
+  title: string;
+}
+
+/**
+ * Traces: small multiples over time, one panel per quantity, stacked with aligned time axes.
+ * A vconcat (not a facet) so that the layout never depends on the data pushed later; the panel
+ * list depends only on the powertrain, so the spec changes only when the powertrain does.
+ */
+export function tracesSpec(panels: readonly TracePanel[]): VisualizationSpec {
+  return {
+    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+    config: CHART_CONFIG,
+    autosize: { type: "fit-x", contains: "padding" },
+    spacing: 14,
+    resolve: { scale: { color: "shared", x: "shared" } },
+    vconcat: panels.map((p, i) => ({
+      data: { name: p.id },
+      width: "container",
+      height: 90,
+      title: { text: p.title, anchor: "start", fontSize: 11, fontWeight: 600, color: INK, offset: 4 },
+      mark: { type: "line", strokeWidth: 1.2, interpolate: p.id === "trace_gear" ? "step-after" : "linear" },
+      encoding: {
+        x: { field: "t", type: "quantitative", title: i === panels.length - 1 ? "time (s)" : null, axis: { labels: i === panels.length - 1 } },
+        y: { field: "value", type: "quantitative", title: null, axis: { tickCount: 4 } },
+        color: seriesColor,
+      },
+    })),
+  } as VisualizationSpec;
+}
 
 /** Engine operating points (engine on) under the full-load curve. */
 export const OPERATING_POINTS_SPEC = {

@@ -3,9 +3,9 @@
 // placeholder for documents that already carry that block.
 import { useMemo } from "react";
 import type { Result } from "@/lib/engine";
-import { flowRows, fullLoadCurve, operatingPoints, traceRows } from "@/lib/client/notebook/chart-data";
+import { flowRows, fullLoadCurve, operatingPoints, tracePanels } from "@/lib/client/notebook/chart-data";
 import { Chart } from "@/components/charts/chart";
-import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, TRACES_SPEC } from "@/components/charts/specs";
+import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, tracesSpec } from "@/components/charts/specs";
 import { WithResult } from "./result-state";
 
 export function EnergyFlow() {
@@ -27,12 +27,13 @@ export function Traces() {
 }
 
 function TracesBody({ result }: { result: Result }) {
-  const datasets = useMemo(() => ({ traces: traceRows(result) }), [result]);
-  return (
-    <div className="overflow-x-auto">
-      <Chart spec={TRACES_SPEC} datasets={datasets} label="Traces over the cycle: speed, power split, SOC, gear" />
-    </div>
-  );
+  const panels = useMemo(() => tracePanels(result), [result]);
+  const layout = panels.map((p) => `${p.id}:${p.title}`).join("|");
+  // The spec follows the list of panels only (i.e. the powertrain), never the values.
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const spec = useMemo(() => tracesSpec(panels.map(({ id, title }) => ({ id, title }))), [layout]);
+  const datasets = useMemo(() => Object.fromEntries(panels.map((p) => [p.id, p.rows])), [panels]);
+  return <Chart key={layout} spec={spec} datasets={datasets} label="Traces over the cycle: speed, power split, SOC, gear" />;
 }
 
 export function OperatingPoints() {

@@ -3,6 +3,7 @@
 import type { Result } from "@/lib/engine";
 import { fmt } from "@/lib/client/notebook/format";
 import { Cautions, WithResult } from "./result-state";
+import { FindingsSummary } from "./findings-summary";
 
 interface Figure {
   id: string;
@@ -55,6 +56,7 @@ export function HeadlineFigures() {
             {fmt(r.kpi.distance_km, 2)} km in {fmt(r.kpi.duration_s, 0)} s
             {r.strategy ? ` · strategy ${r.strategy}` : ""} · ledger closes to {fmt(Math.abs(r.closure_error_j), 3)} J
           </p>
+          <FindingsSummary result={r} />
           <div className="mt-3 border-t border-rule pt-3"><Cautions /></div>
         </>
       )}

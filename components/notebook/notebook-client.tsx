@@ -13,6 +13,7 @@ export interface NotebookClientProps {
   collabUrl: string | null;
   role: string;
   canEdit: boolean;
+  archived: boolean;
   user: { id: string; name: string };
   name: string;
   powertrain: PowertrainKind | null;
@@ -23,7 +24,7 @@ export function NotebookClient(props: NotebookClientProps) {
   const collab = useCollab({ collabUrl: props.collabUrl, documentId: props.documentId, user });
   if (!collab) return <p className="py-section text-center text-sm text-muted">Opening the document…</p>;
   return (
-    <Notebook collab={collab} canEdit={props.canEdit} role={props.role} workspaceId={props.workspaceId} documentId={props.documentId}
+    <Notebook collab={collab} canEdit={props.canEdit} archived={props.archived} role={props.role} workspaceId={props.workspaceId} documentId={props.documentId}
       fallbackName={props.name} fallbackPowertrain={props.powertrain} />
   );
 }

@@ -25,6 +25,7 @@ import { DocumentMessages } from "./document-messages";
 export interface NotebookProps {
   collab: Collab;
   canEdit: boolean;
+  archived: boolean;
   role: string;
   workspaceId: string;
   documentId: string;
@@ -35,7 +36,7 @@ export interface NotebookProps {
 const NO_FINDINGS: Finding[] = [];
 const NO_MESSAGES: CompileMessage[] = [];
 
-export function Notebook({ collab, canEdit, role, workspaceId, documentId, fallbackName, fallbackPowertrain }: NotebookProps) {
+export function Notebook({ collab, canEdit, archived, role, workspaceId, documentId, fallbackName, fallbackPowertrain }: NotebookProps) {
   const { doc, awareness } = collab;
   const undo = useUndo(doc, canEdit);
   const evaluation = useEvaluation(collab.synced ? doc : null);
@@ -86,7 +87,9 @@ export function Notebook({ collab, canEdit, role, workspaceId, documentId, fallb
       </div>
       {canEdit ? null : (
         <p className="mb-gutter rounded-control bg-paper-sunk px-4 py-2.5 text-sm text-ink-soft" data-read-only>
-          You are a {role} in this workspace: you can read this document and follow the figures live, but not change it.
+          {archived
+            ? "This document is archived: it opens read-only until someone unarchives it from the documents list."
+            : `You are a ${role} in this workspace: you can read this document and follow the figures live, but not change it.`}
         </p>
       )}
       <DocumentMessages messages={messagesByBlock.get("") ?? NO_MESSAGES} findings={findings.get("") ?? NO_FINDINGS} />

@@ -13,7 +13,8 @@ type Props = {
 export function AppHeader({ user, workspaces, currentWorkspaceId }: Props) {
   const items = currentWorkspaceId
     ? [
-        { href: `/w/${currentWorkspaceId}`, label: "Documents", exact: true },
+        { href: `/w/${currentWorkspaceId}`, label: "Overview", exact: true },
+        { href: `/w/${currentWorkspaceId}/documents`, label: "Documents" },
         { href: `/w/${currentWorkspaceId}/members`, label: "Members" },
         { href: "/account", label: "Account" },
       ]

@@ -104,7 +104,6 @@ export function thin(n: number, budget: number): number[] {
 }
 
 export interface TraceRow {
-  panel: string;
   series: string;
   t: number;
   value: number;
@@ -112,28 +111,39 @@ export interface TraceRow {
 
 export const TRACE_BUDGET = 1500;
 
-/** Small multiples: speed, power split (engine, motor, friction brakes), SOC (%), gear. */
-export function traceRows(result: Result): TraceRow[] {
+export interface TracePanelData {
+  id: string;
+  title: string;
+  rows: TraceRow[];
+}
+
+/** Small multiples: speed, power split (engine, motor, generator, friction brakes), SOC (%), gear. */
+export function tracePanels(result: Result): TracePanelData[] {
   const tr = result.traces;
   const idx = thin(tr.time_s.length, TRACE_BUDGET);
-  const out: TraceRow[] = [];
-  const push = (panel: string, series: string, values: readonly number[] | undefined, scale = 1) => {
-    if (!values) return;
+  const series = (name: string, values: readonly number[] | undefined, scale = 1): TraceRow[] => {
+    const out: TraceRow[] = [];
+    if (!values) return out;
     for (const i of idx) {
       const t = tr.time_s[i];
       const v = values[i];
-      if (finite(t) && finite(v)) out.push({ panel, series, t, value: v * scale });
+      if (finite(t) && finite(v)) out.push({ series: name, t, value: v * scale });
     }
+    return out;
   };
   const pt = result.powertrain;
-  push("Speed (km/h)", "speed", tr.speed_kmh);
-  if (pt !== "bev") push("Power (kW)", "engine", tr.engine_power_w, 1e-3);
-  if (pt !== "conventional") push("Power (kW)", "motor", tr.motor_power_w, 1e-3);
-  if (pt === "series") push("Power (kW)", "generator", tr.generator_power_w, 1e-3);
-  push("Power (kW)", "friction brakes", tr.brake_power_w, -1e-3);
-  if (pt !== "conventional") push("SOC (%)", "SOC", tr.soc, 100);
-  push("Gear", "gear", tr.gear);
-  return out;
+  const power: TraceRow[] = [];
+  if (pt !== "bev") power.push(...series("engine", tr.engine_power_w, 1e-3));
+  if (pt !== "conventional") power.push(...series("motor", tr.motor_power_w, 1e-3));
+  if (pt === "series") power.push(...series("generator", tr.generator_power_w, 1e-3));
+  power.push(...series("friction brakes", tr.brake_power_w, -1e-3));
+  const panels: TracePanelData[] = [
+    { id: "trace_speed", title: "Speed (km/h)", rows: series("speed", tr.speed_kmh) },
+    { id: "trace_power", title: "Power split (kW; brakes negative)", rows: power },
+  ];
+  if (pt !== "conventional") panels.push({ id: "trace_soc", title: "SOC (%)", rows: series("SOC", tr.soc, 100) });
+  panels.push({ id: "trace_gear", title: "Gear", rows: series("gear", tr.gear) });
+  return panels;
 }
 
 export interface OperatingPoint {

@@ -4,20 +4,11 @@
 import { useEffect, useRef } from "react";
 import type * as Y from "yjs";
 import type { Result } from "@/lib/engine";
-import { putSummary, type DocumentSummary } from "./documents-api";
+import { putSummary, summaryKpi } from "./documents-api";
 
 export const THROTTLE_MS = 3000;
 
-export function summaryOf(result: Result): DocumentSummary {
-  const k = result.kpi;
-  const f = (x: number | null) => (x !== null && Number.isFinite(x) ? x : null);
-  return {
-    fuel_l_per_100km: f(k.fuel_l_per_100km), co2_g_per_km: f(k.co2_g_per_km), electric_kwh_per_100km: f(k.electric_kwh_per_100km),
-    soc_initial: f(k.soc_initial), soc_final: f(k.soc_final), feasible: k.feasible,
-  };
-}
-
-export function useSummaryUpload(opts: { doc: Y.Doc; remoteOrigin?: unknown; enabled: boolean; workspaceId: string; documentId: string; result: Result | null; stale: boolean }) {
+export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspaceId: string; documentId: string; result: Result | null; stale: boolean }) {
   const { doc, enabled, workspaceId, documentId, result, stale } = opts;
   const localEdit = useRef(false);
   const lastSent = useRef(0);
@@ -35,7 +26,7 @@ export function useSummaryUpload(opts: { doc: Y.Doc; remoteOrigin?: unknown; ena
       timer.current = null;
       localEdit.current = false;
       lastSent.current = Date.now();
-      putSummary(workspaceId, documentId, summaryOf(result)).catch(() => { localEdit.current = true; });
+      putSummary(workspaceId, documentId, summaryKpi(result)).catch(() => { localEdit.current = true; });
     };
     if (timer.current) clearTimeout(timer.current);
     timer.current = setTimeout(send, Math.max(0, lastSent.current + THROTTLE_MS - Date.now()));
