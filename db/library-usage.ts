@@ -1,4 +1,4 @@
-import { asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import * as Y from "yjs";
 import { getDb } from "./pool";
 import { documents, documentSnapshots, documentUpdates } from "./schema-documents";
@@ -9,10 +9,11 @@ export type StoredDocumentState = { id: string; name: string; archived: boolean;
  * Every document of a workspace with its current Yjs state (snapshot merged with the update rows
  * not yet compacted), for reading which library items its blocks refer to.
  */
-export async function loadWorkspaceDocumentStates(args: { workspaceId: string }): Promise<StoredDocumentState[]> {
+export async function loadWorkspaceDocumentStates(args: { workspaceId: string; documentIds?: string[] }): Promise<StoredDocumentState[]> {
   const db = getDb();
+  const inWorkspace = eq(documents.workspaceId, args.workspaceId);
   const docs = await db.select({ id: documents.id, name: documents.name, archivedAt: documents.archivedAt })
-    .from(documents).where(eq(documents.workspaceId, args.workspaceId)).orderBy(asc(documents.name));
+    .from(documents).where(args.documentIds ? and(inWorkspace, inArray(documents.id, args.documentIds)) : inWorkspace).orderBy(asc(documents.name));
   if (docs.length === 0) return [];
   const ids = docs.map((d) => d.id);
   const [snaps, updates] = await Promise.all([
