@@ -3,7 +3,8 @@
  * a module under scripts/bench/ and one call below.
  */
 import { printEngineSection } from "./bench/engine";
+import { printStrategiesSection } from "./bench/strategies";
 
 console.log(`node ${process.version}, ${new Date().toISOString()}\n`);
-const results = [printEngineSection()];
+const results = [printEngineSection(), printStrategiesSection()];
 if (results.some((ok) => !ok)) process.exitCode = 1;

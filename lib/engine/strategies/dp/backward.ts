@@ -1,6 +1,6 @@
 import type { CandidateTables } from "./tables";
 import type { BatteryStep } from "./battery-step";
-import { EDGE_TOL, allocCostToGo, interpolateAtEdge, type CostToGo } from "./cost-to-go";
+import { EDGE_TOL, allocCostToGo, virtualise, type CostToGo } from "./cost-to-go";
 import { newStageEval } from "./stage";
 import { locateInterval } from "./edges";
 import { gridTables, type GridTables } from "./grid";
@@ -29,11 +29,11 @@ function setTerminal(c: CostToGo, o: BackwardOptions): void {
     const s = c.soc0 + i * c.h;
     c.J[base + i] = s >= o.socFinalMin - EDGE_TOL && s <= o.socFinalMax + EDGE_TOL ? 0 : Infinity;
   }
-  c.J[base + m] = c.J[base + m - 1];
   c.lo[c.n] = o.socFinalMin;
   c.hi[c.n] = o.socFinalMax;
   c.jLo[c.n] = 0;
   c.jHi[c.n] = 0;
+  virtualise(c, c.n);
 }
 
 /**
@@ -75,7 +75,8 @@ export function backwardPass(t: CandidateTables, bs: BatteryStep, o: BackwardOpt
     }
     if (emptyFromStep >= 0) { markEmpty(c, k); continue; }
     stepRow(t, bs, c, g, k);
-    if (!locateInterval(t, bs, c, k, g.soc, r)) {
+    if (locateInterval(t, bs, c, k, g.soc, r)) virtualise(c, k);
+    else {
       emptyFromStep = k;
       markEmpty(c, k);
     }
@@ -114,7 +115,13 @@ function stepRow(t: CandidateTables, bs: BatteryStep, c: CostToGo, g: GridTables
     else { const pw = power(u, rOhm, iDown); if (pw > pLo) pLo = pw; }
     const base = s - perAmp * (linear ? 0 : u / (2 * rOhm));
     const perWatt = linear ? perAmp / u : 0;
-    let best = Infinity;
+    let best: number;
+    if (!brakes && !linear) {
+      best = bestNonBraking(J, next, stage, bus, first, last, pLo, pHi, u2, r4, (base - s0) * invH, half * invH);
+      J[row + i] = best;
+      continue;
+    }
+    best = Infinity;
     for (let slot = first; slot < last; slot++) {
       let p = bus[slot];
       if (brakes) {
@@ -129,14 +136,34 @@ function stepRow(t: CandidateTables, bs: BatteryStep, c: CostToGo, g: GridTables
         const disc = u2 - r4 * p;
         s1 = base + half * Math.sqrt(disc > 0 ? disc : 0);
       }
+      // [pLo, pHi] keeps SOC' within [lo1, hi1] (±1e-12), where the stored row interpolates exactly (cost-to-go.ts).
       const pos = (s1 - s0) * invH;
       const idx = pos | 0;
-      const a = J[next + idx], b = J[next + idx + 1];
-      const v = a + b < Infinity ? a + (pos - idx) * (b - a) : interpolateAtEdge(c, k + 1, s1, idx, a, b);
-      const cost = stage[slot] + v;
+      const a = J[next + idx];
+      const cost = stage[slot] + a + (pos - idx) * (J[next + idx + 1] - a);
       if (cost < best) best = cost;
     }
     J[row + i] = best;
   }
-  J[row + m] = J[row + m - 1];
+}
+
+/**
+ * The hot loop for a traction or standstill step (bus power independent of SOC) with R > 0:
+ * grid position of SOC' = b0 + hs·√(U² − 4R·P) (b0 = (s − Δ·U/2R − soc0)/h, hs = Δ/(2R·h)).
+ * Kept as its own small function so that the JIT keeps its few values in registers.
+ */
+function bestNonBraking(J: Float64Array, next: number, stage: Float64Array, bus: Float64Array, first: number, last: number,
+  pLo: number, pHi: number, u2: number, r4: number, b0: number, hs: number): number {
+  let best = Infinity;
+  for (let slot = first; slot < last; slot++) {
+    const p = bus[slot];
+    if (p > pHi || p < pLo) continue;
+    const disc = u2 - r4 * p;
+    const pos = b0 + hs * Math.sqrt(disc > 0 ? disc : 0);
+    const idx = pos | 0;
+    const a = J[next + idx];
+    const cost = stage[slot] + a + (pos - idx) * (J[next + idx + 1] - a);
+    if (cost < best) best = cost;
+  }
+  return best;
 }
