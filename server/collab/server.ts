@@ -8,6 +8,7 @@ import { docs, setupWSConnection } from "@y/websocket-server/utils";
 import { admit } from "./admission";
 import { classify, toUint8Array } from "./protocol";
 import { attachConnection, installPersistence, openRoom, openRoomCount, releaseIfIdle, settleReleases } from "./rooms";
+import { handleInject, isInjectRequest } from "./inject";
 
 export type CollabServer = { port: number; close(): Promise<void> };
 
@@ -39,6 +40,8 @@ export async function startCollabServer(args: {
       res.end(JSON.stringify({ ok: true, documents: docs.size, connections: wss.clients.size }));
       return;
     }
+    // Restores from the app (versions): an update already in PostgreSQL, relayed to connected clients.
+    if (isInjectRequest(req)) return void handleInject(req, res).catch(() => res.writeHead(500).end());
     res.writeHead(404, { "content-type": "application/json" }).end(JSON.stringify({ error: "not found" }));
   });
 
