@@ -90,11 +90,14 @@ function kpi(s: Scenario, d: Demand, run: Run): Kpi {
 export interface EvaluateOptions {
   /** Add `step_ledger_w` (15 arrays of N) to the Result. */
   stepLedger?: boolean;
+  /** Long runs (DP): cancel, and the share of backward steps done (strategies/dp). */
+  signal?: AbortSignal;
+  onProgress?: (share: number) => void;
 }
 
 export function evaluateScenario(s: Scenario, options: EvaluateOptions = {}): EvaluateOutcome {
   const { cycle, demand, plant } = prepare(s);
-  const made = makeStrategy(s, plant);
+  const made = makeStrategy(s, plant, { signal: options.signal, onProgress: options.onProgress });
   if (!made.ok) {
     const message = `strategy.kind: ${made.reason}`;
     return { ok: false, errors: [{ path: "strategy.kind", value: made.kind, rule: made.reason, message }] };

@@ -8,6 +8,7 @@ import { FixedStrategy } from "./fixed";
 import { ThermostatStrategy } from "./thermostat";
 import { ParallelRuleStrategy } from "./parallel-rule";
 import { makeOptimisingStrategy } from "./optimising";
+import type { DpRunOptions } from "./dp/solve";
 
 export type { Strategy } from "./strategy";
 
@@ -17,7 +18,7 @@ export type StrategyOutcome = { ok: true; strategy: Strategy } | { ok: false; ki
  * Builds the energy manager named by the scenario (ECMS and DP: strategies/optimising.ts).
  * A kind that does not fit the powertrain comes back as a clear refusal.
  */
-export function makeStrategy(s: Scenario, plant: Plant): StrategyOutcome {
+export function makeStrategy(s: Scenario, plant: Plant, run: DpRunOptions = {}): StrategyOutcome {
   const spec = s.strategy;
   if (plant.powertrain === "conventional" || plant.powertrain === "bev" || !spec) return { ok: true, strategy: new FixedStrategy(plant) };
   const b = s.battery!;
@@ -35,7 +36,7 @@ export function makeStrategy(s: Scenario, plant: Plant): StrategyOutcome {
       }),
     };
   }
-  const optimising = makeOptimisingStrategy(spec, plant);
+  const optimising = makeOptimisingStrategy(spec, plant, run);
   if (optimising) return { ok: true, strategy: optimising };
   return { ok: false, kind: spec.kind, reason: `strategy '${spec.kind}' is not available yet for powertrain '${plant.powertrain}'` };
 }
