@@ -26,7 +26,9 @@ export function useUndo(doc: Y.Doc, enabled: boolean): Undo {
     manager.on("stack-item-added", sync);
     manager.on("stack-item-popped", sync);
     manager.on("stack-cleared", sync);
-    return () => { manager.off("stack-item-added", sync); manager.off("stack-item-popped", sync); manager.off("stack-cleared", sync); manager.destroy(); };
+    // No destroy() here: the manager lives as long as its doc (Yjs destroys it with the doc), and
+    // an effect cleanup also runs on React's development remount, which would leave it dead.
+    return () => { manager.off("stack-item-added", sync); manager.off("stack-item-popped", sync); manager.off("stack-cleared", sync); };
   }, [manager]);
 
   // Ctrl/Cmd+Z and Shift+Z (and Ctrl+Y) outside the text editors; inside them CodeMirror's

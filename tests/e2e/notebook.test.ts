@@ -1,0 +1,117 @@
+// Two people co-edit one scenario document in two browsers: the editor's change of the vehicle
+// mass reaches the other editor through the collaboration server, and both see the headline
+// figures recalculated by their own evaluation worker. A reviewer follows along read-only.
+// Demo accounts come from scripts/seed/foundation.ts (seeded by scripts/test.sh).
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { appUrl, openPerson, screenshot, type Person } from "./support/browser";
+import { ConsoleWatch } from "./support/console-watch";
+import { gotoApp } from "./support/flows";
+import { DEMO_PASSWORD, DEMO_USERS } from "../../scripts/seed/foundation";
+
+const email = (role: string) => DEMO_USERS.find((u) => u.role === role)!.email;
+
+async function signIn(page: Page, who: string): Promise<void> {
+  await gotoApp(page, "/sign-in");
+  await page.getByLabel("E-mail", { exact: true }).fill(who);
+  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(/\/w\//);
+}
+
+/** The demo workspace id, and a fresh parallel-hybrid document in it created through the API. */
+async function createDocument(page: Page, name: string): Promise<{ workspaceId: string; documentId: string }> {
+  const me = await page.request.get(appUrl("/api/me"));
+  expect(me.status()).toBe(200);
+  const { workspaces } = (await me.json()) as { workspaces: { id: string; name: string }[] };
+  const workspaceId = workspaces[0]!.id;
+  const res = await page.request.post(appUrl(`/api/workspaces/${workspaceId}/documents`), {
+    data: { name, powertrain: "parallel" },
+    headers: { origin: new URL(appUrl("/")).origin },
+  });
+  expect(res.status()).toBe(201);
+  const { document } = (await res.json()) as { document: { id: string } };
+  return { workspaceId, documentId: document.id };
+}
+
+const massField = (page: Page) => page.locator('[data-block-kind="body"] [data-field="mass"] .cm-content');
+/** The field's text without the remote cursors (name flags) that y-codemirror draws inside it. */
+const massText = (page: Page) =>
+  massField(page).evaluate((el) => {
+    const copy = el.cloneNode(true) as HTMLElement;
+    copy.querySelectorAll(".cm-ySelectionCaret, .cm-ySelectionInfo, .cm-widgetBuffer").forEach((n) => n.remove());
+    return (copy.textContent ?? "").replace(/\u2060/g, "");
+  });
+const fuelFigure = (page: Page) => page.locator('[data-block-kind="headline_figures"] [data-kpi="fuel"]');
+
+async function openDocument(page: Page, path: string): Promise<void> {
+  await gotoApp(page, path);
+  await page.locator('[data-connection="connected"]').waitFor();
+  await fuelFigure(page).waitFor();
+}
+
+describe("notebook: two people in one document", () => {
+  let a: Person, b: Person, reviewer: Person;
+  let watches: ConsoleWatch[] = [];
+  beforeAll(async () => {
+    [a, b, reviewer] = await Promise.all([openPerson(), openPerson(), openPerson()]);
+    watches = [a, b, reviewer].map((p) => new ConsoleWatch(p.page));
+  });
+  afterAll(async () => {
+    await Promise.all([a?.close(), b?.close(), reviewer?.close()]);
+  });
+
+  test("an edit by one editor reaches the other with recalculated figures; a reviewer cannot type", async () => {
+    await signIn(a.page, email("editor"));
+    await signIn(b.page, email("owner"));
+    await signIn(reviewer.page, email("reviewer"));
+    const { workspaceId, documentId } = await createDocument(a.page, `Van co-edit ${Date.now().toString(36)}`);
+    const path = `/w/${workspaceId}/documents/${documentId}`;
+    await Promise.all([openDocument(a.page, path), openDocument(b.page, path), openDocument(reviewer.page, path)]);
+
+    // Everyone sees the same figure before the edit; the template's mass is a formula.
+    const before = await fuelFigure(b.page).innerText();
+    expect(before).toMatch(/^\d+\.\d\d$/);
+    expect(await fuelFigure(a.page).innerText()).toBe(before);
+    expect(await massText(b.page)).toBe("curb_mass + payload");
+
+    // Presence: B sees A in the document.
+    const aName = DEMO_USERS.find((u) => u.role === "editor")!.name;
+    await b.page.locator("[data-presence]").getByText(aName).waitFor();
+
+    // A replaces the mass by 2400 kg (from 1600 kg): more inertia and rolling work, more fuel.
+    await massField(a.page).click();
+    await a.page.keyboard.press("Control+A");
+    await a.page.keyboard.insertText("2400 kg");
+    await expect.poll(() => massText(b.page), { timeout: 10_000 }).toBe("2400 kg");
+    await expect.poll(() => fuelFigure(b.page).innerText(), { timeout: 10_000 }).not.toBe(before);
+    const after = await fuelFigure(b.page).innerText();
+    expect(Number(after)).toBeGreaterThan(Number(before));
+    await expect.poll(() => fuelFigure(a.page).innerText(), { timeout: 10_000 }).toBe(after);
+    // B's compiled value under the field follows the text.
+    await expect.poll(() => b.page.locator('[data-block-kind="body"] [data-field="mass"] [data-compiled-value]').innerText()).toBe("= 2400 kg");
+    await screenshot(a.page, "nb1-editor-a-after-edit");
+    await screenshot(b.page, "nb2-editor-b-sees-edit");
+
+    // The reviewer sees the edit too, but cannot change a field or add blocks.
+    await expect.poll(() => massText(reviewer.page), { timeout: 10_000 }).toBe("2400 kg");
+    await expect.poll(() => fuelFigure(reviewer.page).innerText(), { timeout: 10_000 }).toBe(after);
+    expect(await massField(reviewer.page).getAttribute("contenteditable")).toBe("false");
+    await massField(reviewer.page).click();
+    await reviewer.page.keyboard.type("9999");
+    await reviewer.page.waitForTimeout(500);
+    expect(await massText(reviewer.page)).toBe("2400 kg");
+    expect(await massText(a.page)).toBe("2400 kg");
+    expect(await reviewer.page.getByRole("button", { name: "+ Add block" }).count()).toBe(0);
+    await reviewer.page.locator("[data-read-only]").waitFor();
+    await screenshot(reviewer.page, "nb3-reviewer-read-only");
+
+    // Undo is per person: A's Ctrl+Z restores the formula for everyone.
+    await massField(a.page).click();
+    await a.page.keyboard.press("Control+Z");
+    await expect.poll(() => massText(b.page), { timeout: 10_000 }).toBe("curb_mass + payload");
+    await expect.poll(() => fuelFigure(b.page).innerText(), { timeout: 10_000 }).toBe(before);
+
+    for (const w of watches) expect(w.take()).toEqual([]);
+  });
+});
