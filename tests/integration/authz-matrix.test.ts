@@ -16,6 +16,7 @@ import { newToken } from "@/lib/auth/tokens";
 import { call } from "./support/http";
 import { useMailSink } from "./support/mail";
 import { teamWorkspace, type TestUser } from "./support/users";
+import { VERSION_ROUTES } from "./versions-matrix-cases";
 
 useMailSink();
 
@@ -71,6 +72,7 @@ const ROUTES: RouteCase[] = [
     send: (s) =>
       call(memberRoute.DELETE, "DELETE", "/", { cookie: s.caller?.cookie, params: { workspaceId: s.workspaceId, userId: s.caller?.id ?? s.ownerId } }),
   },
+  ...VERSION_ROUTES,
 ];
 
 async function setup(who: Who): Promise<Setup> {
