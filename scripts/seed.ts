@@ -5,9 +5,13 @@
 // SeedContext and add it to STEPS, after the steps whose ids it needs.
 import { closeDb } from "../db/pool";
 import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME, seedFoundation } from "./seed/foundation";
+import { seedDemoDocuments } from "./seed/demo-documents";
 import type { SeedContext, SeedStep } from "./seed/types";
 
-const STEPS: SeedStep[] = [{ name: "demo team and workspace", run: seedFoundation }];
+const STEPS: SeedStep[] = [
+  { name: "demo team and workspace", run: seedFoundation },
+  { name: "demo van documents", run: seedDemoDocuments },
+];
 
 function printSignins(): void {
   const url = process.env.APP_URL ?? `http://127.0.0.1:${process.env.APP_PORT ?? "3210"}`;
