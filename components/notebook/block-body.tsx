@@ -27,7 +27,7 @@ function FieldsForm({ id, kind, map, messages }: { id: string; kind: BlockKind; 
   const drivers = Array.from(new Set(fields.flatMap((f) => (f.when ? [f.when.field] : []))));
   const choices = useParamValues(map, drivers);
   return (
-    <div className="space-y-3">
+    <div className="grid gap-x-6 gap-y-3 lg:grid-cols-2">
       {fields.filter((f) => fieldActive(f, choices, kind)).map((f) => (
         <FieldRow key={f.key} blockId={id} kind={kind} map={map} field={f} messages={messages.filter((m) => m.field === f.key)} />
       ))}

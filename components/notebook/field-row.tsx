@@ -3,7 +3,7 @@
 // choice), the compiled value in the Scenario's unit, and compile messages under it.
 import { useId } from "react";
 import { fieldLabel, setParam, type BlockKind, type BlockMap, type ChoiceField, type CompileMessage, type FieldDef } from "@/lib/notebook";
-import { fmt } from "@/lib/client/notebook/format";
+import { fmtValue } from "@/lib/client/notebook/format";
 import { FieldMessages } from "./field-messages";
 import { useNotebook } from "./notebook-context";
 import { TextEditor } from "./text-editor";
@@ -17,23 +17,23 @@ export function FieldRow({ blockId, kind, map, field, messages }: { blockId: str
   const own = messages.map((m) => (m.text.startsWith(prefix) ? { ...m, text: m.text.slice(prefix.length) } : m));
   const value = evaluation.values[blockId]?.[field.key];
   return (
-    <div className="grid gap-x-4 gap-y-1 sm:grid-cols-[13rem_1fr]" data-field={field.key}>
-      <div className="pt-1.5">
+    <div className={`min-w-0 ${field.type === "list" ? "lg:col-span-2" : ""}`} data-field={field.key}>
+      <div className="mb-1 flex flex-wrap items-baseline gap-x-2">
         <label htmlFor={field.type === "choice" ? id : undefined} id={`${id}-label`} className="text-sm font-medium text-ink">
           {field.label}
-          {field.optional ? <span className="ml-1 text-xs font-normal text-muted">optional</span> : null}
         </label>
-        {field.help ? <p className="text-xs text-muted">{field.help}</p> : null}
+        {field.optional ? <span className="text-xs text-muted">optional</span> : null}
       </div>
-      <div className="min-w-0">
-        {field.type === "choice" ? (
-          <ChoiceInput id={id} blockId={blockId} map={map} field={field} label={label} invalid={own.length > 0} />
-        ) : (
-          <TextInput map={map} field={field} label={label} invalid={own.some((m) => m.severity === "error")} messagesId={`${id}-messages`} blockId={blockId} />
-        )}
+      {field.type === "choice" ? (
+        <ChoiceInput id={id} blockId={blockId} map={map} field={field} label={label} invalid={own.length > 0} />
+      ) : (
+        <TextInput map={map} field={field} label={label} invalid={own.some((m) => m.severity === "error")} messagesId={`${id}-messages`} blockId={blockId} />
+      )}
+      <div className="mt-0.5 flex flex-wrap justify-between gap-x-3 text-xs">
         <CompiledValue field={field} value={value} />
-        <FieldMessages id={`${id}-messages`} messages={own} text={paramsOf(map)?.get(field.key)?.toString() ?? ""} />
+        {field.help ? <p className="ml-auto text-right text-muted">{field.help}</p> : null}
       </div>
+      <FieldMessages id={`${id}-messages`} messages={own} text={paramsOf(map)?.get(field.key)?.toString() ?? ""} />
     </div>
   );
 }
@@ -99,9 +99,9 @@ function CompiledValue({ field, value }: { field: FieldDef; value: unknown }) {
   if (field.type === "choice" || field.type === "text" || value === undefined || value === null) return null;
   const unit = field.unit ? ` ${field.unit}` : "";
   let shown: string | null = null;
-  if (typeof value === "number" && Number.isFinite(value)) shown = `= ${fmt(value, Math.abs(value) >= 100 ? 0 : Math.abs(value) >= 1 ? 2 : 4)}${unit}`;
+  if (typeof value === "number" && Number.isFinite(value)) shown = `= ${fmtValue(value)}${unit}`;
   else if (Array.isArray(value)) shown = `${value.length} value${value.length === 1 ? "" : "s"}${unit ? ` in${unit}` : ""}`;
   if (!shown) return null;
-  return <p className="mt-0.5 font-mono text-xs text-muted" data-compiled-value>{shown}</p>;
+  return <p className="font-mono text-muted" data-compiled-value>{shown}</p>;
 }
 

@@ -18,3 +18,10 @@ export function fmtGrouped(x: number | null | undefined, decimals = 0): string {
 export function fmtPct(x: number | null | undefined, decimals = 1): string {
   return x === null || x === undefined || !Number.isFinite(x) ? "—" : `${fmt(x, decimals)} %`;
 }
+
+/** A compiled value: four significant digits, no trailing zeros (1.6, 0.745, 42.7, 6000). */
+export function fmtValue(x: number | null | undefined): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return "—";
+  const text = Math.abs(x) >= 1000 ? x.toFixed(0) : Number(x.toPrecision(4)).toString();
+  return text.replace(/^-/, "−");
+}
