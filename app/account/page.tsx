@@ -25,6 +25,9 @@ export default async function AccountPage() {
         <Panel title="Password">
           <PasswordForm />
         </Panel>
+        <Panel title="API tokens" description="Personal tokens for scripts and the evaluate API: scoped to one workspace, shown once, revocable.">
+          <a className="text-sm underline" href="/account/tokens">Manage API tokens</a>
+        </Panel>
         <Panel title="Sign out" description="Ends this session in this browser.">
           <SignOutButton variant="secondary" />
         </Panel>

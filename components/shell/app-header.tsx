@@ -15,6 +15,7 @@ export function AppHeader({ user, workspaces, currentWorkspaceId }: Props) {
     ? [
         { href: `/w/${currentWorkspaceId}`, label: "Overview", exact: true },
         { href: `/w/${currentWorkspaceId}/documents`, label: "Documents" },
+        { href: `/w/${currentWorkspaceId}/library`, label: "Library" },
         { href: `/w/${currentWorkspaceId}/members`, label: "Members" },
         { href: "/account", label: "Account" },
       ]
