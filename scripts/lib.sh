@@ -3,6 +3,8 @@
 # Everything here is idempotent: running it twice changes nothing the second time.
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+# The machines have no internet: keep Next from trying to send telemetry.
+export NEXT_TELEMETRY_DISABLED=1
 PGBIN="$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1)"
 
 log() { printf '\033[1;33m[joulebook]\033[0m %s\n' "$*" >&2; }
