@@ -10,7 +10,7 @@ import { setDocumentArchived } from "@/db/documents";
 import { getDb } from "@/db/pool";
 import { documents, users } from "@/db/schema";
 import { DEMO_DOCUMENTS } from "@/lib/demo";
-import { evaluateScenarioInput } from "@/lib/engine";
+import { evaluateScenarioInput, type Scenario } from "@/lib/engine";
 import { compile, compileDoc, readDoc } from "@/lib/notebook";
 import { setParam } from "@/lib/notebook/model";
 import { seedFoundation } from "@/scripts/seed/foundation";
@@ -78,7 +78,7 @@ describe("seed: demo van documents", () => {
     expect(after).toHaveLength(DEMO_DOCUMENTS.length);
     const ydoc = new Y.Doc();
     Y.applyUpdate(ydoc, await loadDocumentState({ documentId: edited.id }));
-    expect(compileDoc(ydoc).scenario?.vehicle.rolling_resistance).toBe(0.008);
+    expect((compileDoc(ydoc).scenario as Scenario | undefined)?.vehicle.rolling_resistance).toBe(0.008);
     expect(after.find((r) => r.id === archived.id)?.archivedAt).not.toBeNull();
   });
 });
