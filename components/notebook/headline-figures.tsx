@@ -4,6 +4,7 @@ import type { Result } from "@/lib/engine";
 import { fmt } from "@/lib/client/notebook/format";
 import { Cautions, WithResult } from "./result-state";
 import { FindingsSummary } from "./findings-summary";
+import { useNotebook } from "./notebook-context";
 
 interface Figure {
   id: string;
@@ -36,11 +37,12 @@ function figures(r: Result): Figure[] {
 }
 
 export function HeadlineFigures() {
+  const { evaluation } = useNotebook();
   return (
     <WithResult>
       {(r) => (
         <>
-          <dl className="grid grid-cols-2 gap-3 md:grid-cols-5">
+          <dl className="grid grid-cols-2 gap-3 md:grid-cols-5" data-eval-ms={evaluation.elapsed_ms?.toFixed(1)}>
             {figures(r).map((f) => (
               <div key={f.id} className={`rounded-control border-l-4 bg-paper px-3 py-2.5 ${f.accent}`}>
                 <dt className="text-xs font-medium uppercase tracking-wide text-muted">{f.label}</dt>
