@@ -4,8 +4,8 @@ import { createScenarioDoc } from "@/lib/notebook/templates";
 import { E_AXLE_MOTOR, E_AXLE_MOTOR_NOTE, E_AXLE_REDUCTION, E_AXLE_REDUCTION_NOTE } from "./e-axle";
 import { bodyNote, CYCLE_LABELS, DEMO_CAUTION, DIESEL_FUEL, DIESEL_FUEL_NOTE, driveCycleNote, driveCycleParams, parametersNote, vanBody, vanParameters, type DemoCycle } from "./van";
 
-/** Thermostat settings: charge-sustaining around SOC 0.30 (see the energy manager note). */
-export const SERIES_THERMOSTAT = { soc_initial: 0.3, soc_on: 0.28, soc_off: 0.31, on_power_kw: 40 };
+/** Thermostat settings: charge-sustaining around SOC 0.3 (see the energy manager note). */
+export const SERIES_THERMOSTAT = { soc_initial: 0.31, soc_on: 0.27, soc_off: 0.32, on_power_kw: 60 };
 
 const GENSET_ENGINE: Record<string, string> = {
   displacement: "1.5 L",
@@ -22,11 +22,11 @@ const BATTERY: Record<string, string> = {
   capacity: "70 Ah",
   ocv_soc: "0, 0.1, 0.5, 0.9, 1",
   ocv_voltage: "310, 335, 355, 378, 390 V",
-  resistance: "0.08 Ω",
+  resistance: "0.06 Ω",
   soc_initial: String(SERIES_THERMOSTAT.soc_initial),
   soc_min: "0.15",
   soc_max: "0.95",
-  max_discharge_c: "5 C",
+  max_discharge_c: "6 C",
   max_charge_c: "3 C",
 };
 
@@ -42,7 +42,7 @@ const ENERGY_MANAGER: Record<string, string> = {
   soc_feedback_gain: "5",
   soc_target: String(t.soc_initial),
   soc_final_min: String(t.soc_initial),
-  soc_final_max: String(t.soc_initial + 0.01),
+  soc_final_max: (t.soc_initial + 0.01).toFixed(2),
 };
 
 export function buildSeriesVan(cycle: DemoCycle, name: string): Y.Doc {
@@ -73,23 +73,23 @@ export function buildSeriesVan(cycle: DemoCycle, name: string): Y.Doc {
       driveline: E_AXLE_REDUCTION_NOTE,
       engine: [
         "1.5 L four-cylinder diesel for the generator set, 75 kW mechanical from 3,250 rpm (invented for the demo); it never drives the wheels. A diesel keeps one fuel in the fleet's depot.",
-        "The set runs on its best-fuel line: with a constant Willans e that is the lowest speed whose full-load torque gives the power, so 40 kW is made at about 1,700 rpm near full load.",
+        "The set runs on its best-fuel line: with a constant Willans e that is the lowest speed whose full-load torque gives the power, so its 60 kW (65 kW at the shaft) are made at about 2,600 rpm on the torque plateau.",
         "Willans e 0.45 and p_me0 1.4 bar, in the diesel ranges e 0.45–0.50 and p_me0 0.7–1.5 bar (REFERENCES.md, from memory); invented for the demo.",
         DIESEL_FUEL_NOTE,
       ].join("\n"),
-      generator_set: "60 kW electrical at 92 % (generator and rectifier together, constant; invented for the demo). 60 kW covers the laden van's mean demand on a motorway (roughly 35–45 kW at the wheels at 100–110 km/h), so the van does not run out of pack on a long stretch; more would add cost and mass.",
+      generator_set: "60 kW electrical at 92 % (generator and rectifier together, constant; invented for the demo). 60 kW covers the laden van's demand at a steady 110 km/h (about 40 kW at the wheels, 48 kW from the bus), so the van does not run out of pack on a long stretch; more would add cost and mass.",
       electric_machine: E_AXLE_MOTOR_NOTE,
       battery_pack: [
         "25 kWh (70 Ah at about 355 V nominal), an energy-oriented pack like a smaller version of Van D's (invented for the demo). Generic OCV curve, flat in the middle (invented for the demo).",
-        "Window 0.15–0.95 for the whole shift; this document starts at 0.30, the level at which the generator set takes over after the electric-only rounds.",
-        "Resistance 0.08 Ω: about 7 kW lost at the motor's full 120 kW (invented for the demo). Discharge limit 5 C = 350 A ≈ 124 kW, charge limit 3 C = 210 A ≈ 75 kW, above the motor's recuperation.",
+        `Window 0.15–0.95 for the whole shift; this document starts at ${SERIES_THERMOSTAT.soc_initial}, about the level at which the generator set takes over after the electric-only rounds.`,
+        "Resistance 0.06 Ω: about 8 kW lost at 120 kW from the pack (invented for the demo). Discharge limit 6 C = 420 A, enough for the motor's full 120 kW (about 132 kW electrical) with the set off; charge limit 3 C = 210 A ≈ 75 kW, above the motor's recuperation.",
         "Battery current, voltage and temperature limits come from the cell maker's data and the applicable safety standards, not from this tool.",
       ].join("\n"),
       energy_manager: [
         `Thermostat: the generator set switches on when the SOC falls to ${t.soc_on}, delivers ${t.on_power_kw} kW (also while the van stands) and switches off at ${t.soc_off}; in between it keeps its state. The round starts at ${t.soc_initial}, inside the band, so it ends in or close to the band ${t.soc_on}–${t.soc_off} (a hard climb can pull the SOC below soc_on while the set runs, recuperation can lift it above soc_off): charge-sustaining within a few % SOC, which the unit tests check (tests/unit/demo).`,
-        `Why ${t.on_power_kw} kW: well above the van's mean electrical demand on the round, so each on-period is short and the engine works near full load (about 1,700 rpm), where a Willans engine is most efficient because friction is a smaller share; more power would raise the battery's I²R loss and the charge current.`,
-        "Tuning: with a 25 kWh pack a band of a few % SOC means only two or three engine starts per round, so where in the band the round ends is a matter of timing. We tried on-powers of 30–60 kW and bands between 0.25 and 0.35 and kept the one for which both the route and the NEDC end within 0.3 % SOC of their start, so that the fuel figures need no SOC correction. Another round length can end anywhere in the band: the Strategy comparison block reports the SOC-corrected fuel.",
-        "ECMS (target 0.30) and DP (final SOC 0.30–0.31) are prefilled for a switch; the Strategy comparison block runs them against this thermostat.",
+        `Why ${t.on_power_kw} kW, the set's rating: each on-period is short and the engine works at full load, where a Willans engine is most efficient because friction is the smallest share. The price is in the battery: at standstill nearly all of it goes into the pack, about 160 A, losing some 1.6 kW (under 3 %) in the 0.06 Ω of the pack.`,
+        "Tuning: with a 25 kWh pack a band of a few % SOC means only two or three engine starts per round, so where in the band the round ends is a matter of timing. We tried on-powers of 30–60 kW, bands between 0.25 and 0.35 and starting SOCs inside them, and kept the one for which both the route and the NEDC end within 0.2 % SOC of their start, so that the fuel figures need no SOC correction. Another round length can end anywhere in the band: the Strategy comparison block reports the SOC-corrected fuel.",
+        `ECMS (target ${t.soc_initial}) and DP (final SOC ${t.soc_initial}–${(t.soc_initial + 0.01).toFixed(2)}) are prefilled for a switch; the Strategy comparison block runs them against this thermostat.`,
       ].join("\n"),
     },
   });

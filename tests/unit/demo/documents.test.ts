@@ -127,13 +127,13 @@ describe("demo documents: figures a van engineer would accept (rules of thumb, n
     }
   });
 
-  it("the range extender ends inside its thermostat band and within 0.3 % SOC of its start, as its note says", () => {
+  it("the range extender ends inside its thermostat band and within 0.2 % SOC of its start, as its note says", () => {
     for (const cycle of ["route", "nedc"]) {
       const k = run(`series-${cycle}`).result.kpi;
       expect(k.soc_initial).toBe(SERIES_THERMOSTAT.soc_initial);
       expect(k.soc_final!).toBeGreaterThanOrEqual(SERIES_THERMOSTAT.soc_on - 0.005);
       expect(k.soc_final!).toBeLessThanOrEqual(SERIES_THERMOSTAT.soc_off + 0.005);
-      expect(Math.abs(k.soc_final! - k.soc_initial!), cycle).toBeLessThan(0.003);
+      expect(Math.abs(k.soc_final! - k.soc_initial!), cycle).toBeLessThan(0.002);
     }
   });
 
