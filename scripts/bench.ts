@@ -4,7 +4,8 @@
  */
 import { printEngineSection } from "./bench/engine";
 import { printStrategiesSection } from "./bench/strategies";
+import { runCollabSection } from "./bench/collab-section";
 
 console.log(`node ${process.version}, ${new Date().toISOString()}\n`);
-const results = [printEngineSection(), printStrategiesSection()];
+const results = [printEngineSection(), printStrategiesSection(), runCollabSection()];
 if (results.some((ok) => !ok)) process.exitCode = 1;
