@@ -77,7 +77,7 @@ export function buildSeriesVan(cycle: DemoCycle, name: string): Y.Doc {
         "Willans e 0.45 and p_me0 1.4 bar, in the diesel ranges e 0.45–0.50 and p_me0 0.7–1.5 bar (REFERENCES.md, from memory); invented for the demo.",
         DIESEL_FUEL_NOTE,
       ].join("\n"),
-      generator_set: "60 kW electrical at 92 % (generator and rectifier together, constant; invented for the demo). 60 kW covers the laden van's demand at a steady 110 km/h (about 40 kW at the wheels, 48 kW from the bus), so the van does not run out of pack on a long stretch; more would add cost and mass.",
+      generator_set: "60 kW electrical at 92 % (generator and rectifier together, constant; invented for the demo). 60 kW covers the laden van's demand at a steady 110 km/h (about 40 kW at the wheels, 46 kW from the bus), so the van does not run out of pack on a long stretch; more would add cost and mass.",
       electric_machine: E_AXLE_MOTOR_NOTE,
       battery_pack: [
         "25 kWh (70 Ah at about 355 V nominal), an energy-oriented pack like a smaller version of Van D's (invented for the demo). Generic OCV curve, flat in the middle (invented for the demo).",
@@ -86,7 +86,7 @@ export function buildSeriesVan(cycle: DemoCycle, name: string): Y.Doc {
         "Battery current, voltage and temperature limits come from the cell maker's data and the applicable safety standards, not from this tool.",
       ].join("\n"),
       energy_manager: [
-        `Thermostat: the generator set switches on when the SOC falls to ${t.soc_on}, delivers ${t.on_power_kw} kW (also while the van stands) and switches off at ${t.soc_off}; in between it keeps its state. The round starts at ${t.soc_initial}, inside the band, so it ends in or close to the band ${t.soc_on}–${t.soc_off} (a hard climb can pull the SOC below soc_on while the set runs, recuperation can lift it above soc_off): charge-sustaining within a few % SOC, which the unit tests check (tests/unit/demo).`,
+        `Thermostat: the generator set switches on when the SOC falls to ${t.soc_on}, delivers ${t.on_power_kw} kW (also while the van stands) and switches off at ${t.soc_off}; in between it keeps its state. The round starts at ${t.soc_initial}, inside the band, so it ends in or close to the band ${t.soc_on}–${t.soc_off} (a long full-power stretch can pull the SOC below soc_on while the set runs, recuperation can lift it above soc_off): charge-sustaining within a few % SOC, which the unit tests check (tests/unit/demo).`,
         `Why ${t.on_power_kw} kW, the set's rating: each on-period is short and the engine works at full load, where a Willans engine is most efficient because friction is the smallest share. The price is in the battery: at standstill nearly all of it goes into the pack, about 160 A, losing some 1.6 kW (under 3 %) in the 0.06 Ω of the pack.`,
         "Tuning: with a 25 kWh pack a band of a few % SOC means only two or three engine starts per round, so where in the band the round ends is a matter of timing. We tried on-powers of 30–60 kW, bands between 0.25 and 0.35 and starting SOCs inside them, and kept the one for which both the route and the NEDC end within 0.2 % SOC of their start, so that the fuel figures need no SOC correction. Another round length can end anywhere in the band: the Strategy comparison block reports the SOC-corrected fuel.",
         `ECMS (target ${t.soc_initial}) and DP (final SOC ${t.soc_initial}–${(t.soc_initial + 0.01).toFixed(2)}) are prefilled for a switch; the Strategy comparison block runs them against this thermostat.`,
