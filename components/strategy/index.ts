@@ -1,0 +1,2 @@
+export { StrategyComparison } from "./strategy-comparison";
+export { StrategyComparisonRunner } from "./strategy-comparison-runner";

@@ -1,0 +1,75 @@
+"use client";
+// The strategy comparison (rule or thermostat vs ECMS vs DP on one scenario): a table of the
+// figures engineers compare, fuel bars and SOC traces. Renders a finished Comparison; see
+// strategy-comparison-runner.tsx for running one.
+import { useMemo } from "react";
+import type { Comparison, StrategyFigures } from "@/lib/engine/strategies/compare";
+import { Chart } from "@/components/charts/chart";
+import { FUEL_BARS_SPEC, SOC_TRACES_SPEC } from "./specs";
+import { fuelRows, socRows } from "./rows";
+
+const num = (x: number, digits = 1) => x.toLocaleString("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+const signed = (x: number, digits = 1) => `${x > 0 ? "+" : ""}${num(x, digits)}`;
+
+const REGIONS: { key: keyof StrategyFigures["regions_s"]; title: string }[] = [
+  { key: "electric_s", title: "electric" },
+  { key: "engine_only_s", title: "engine only" },
+  { key: "engine_assist_s", title: "engine + assist" },
+  { key: "engine_charging_s", title: "engine charging" },
+  { key: "regenerating_s", title: "braking / regen." },
+  { key: "standstill_s", title: "standstill" },
+];
+
+function Row({ s }: { s: StrategyFigures }) {
+  return (
+    <tr className="border-t border-rule">
+      <th scope="row" className="py-1.5 pr-3 text-left font-medium">{s.label}</th>
+      <td className="px-2 text-right font-mono">{num(s.fuel_g)}</td>
+      <td className="px-2 text-right font-mono">{num(s.fuel_corrected_g)}</td>
+      <td className="px-2 text-right font-mono">{s.kind === "dp" ? "—" : `${signed(s.gap_to_dp_pct)} %`}</td>
+      <td className="px-2 text-right font-mono">{num(s.soc_final, 4)}</td>
+      <td className="px-2 text-right font-mono">{num(s.electric_drive_s, 0)}</td>
+      <td className="px-2 text-right font-mono">{s.engine_starts}</td>
+      {REGIONS.map((r) => <td key={r.key} className="px-2 text-right font-mono">{num(s.regions_s[r.key], 0)}</td>)}
+      <td className="pl-2 text-right">{s.feasible ? "yes" : `no (${s.infeasible_steps})`}</td>
+    </tr>
+  );
+}
+
+export function StrategyComparison({ comparison: c }: { comparison: Comparison }) {
+  const fuel = useMemo(() => ({ fuel: fuelRows(c) }), [c]);
+  const soc = useMemo(() => ({ soc: socRows(c) }), [c]);
+  return (
+    <div className="space-y-4">
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm">
+          <caption className="mb-2 text-left text-muted">
+            {c.name}: {num(c.distance_km, 2)} km in {num(c.duration_s, 0)} s. Fuel in grams; SOC-corrected with η = {num(c.correction.efficiency, 3)} (see notes); times in seconds.
+          </caption>
+          <thead>
+            <tr className="text-xs text-muted">
+              <th scope="col" className="pb-1 text-left font-medium">strategy</th>
+              <th scope="col" className="px-2 text-right font-medium">fuel</th>
+              <th scope="col" className="px-2 text-right font-medium">SOC-corrected</th>
+              <th scope="col" className="px-2 text-right font-medium">gap to DP</th>
+              <th scope="col" className="px-2 text-right font-medium">final SOC</th>
+              <th scope="col" className="px-2 text-right font-medium">electric drive</th>
+              <th scope="col" className="px-2 text-right font-medium">engine starts</th>
+              {REGIONS.map((r) => <th key={r.key} scope="col" className="px-2 text-right font-medium">{r.title}</th>)}
+              <th scope="col" className="pl-2 text-right font-medium">feasible</th>
+            </tr>
+          </thead>
+          <tbody>{c.strategies.map((s) => <Row key={s.kind} s={s} />)}</tbody>
+        </table>
+      </div>
+      <Chart spec={FUEL_BARS_SPEC} datasets={fuel} label="Fuel per strategy, burnt and SOC-corrected" />
+      <Chart spec={SOC_TRACES_SPEC} datasets={soc} label="State of charge over the cycle for each strategy" />
+      <ul className="list-disc space-y-1 pl-5 text-xs text-muted">
+        <li>ECMS uses the equivalence factor {num(c.ecms.equivalence_factor, 3)} found by bisection for a charge-sustaining cycle{c.ecms.charge_sustaining ? "" : " (none found: the closest is shown)"}.</li>
+        <li>DP: {c.dp.soc_points} SOC points × {c.dp.control_points} controls, final SOC {num(c.dp.soc_final_min, 4)}–{num(c.dp.soc_final_max, 4)}; it knows the whole cycle, so it is the lower bound up to grid error.</li>
+        <li>Correction: {c.correction.method}.</li>
+        {c.findings.map((f, i) => <li key={i} className={f.severity === "infeasible" ? "text-danger" : ""}>{f.message}</li>)}
+      </ul>
+    </div>
+  );
+}
