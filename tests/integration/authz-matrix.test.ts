@@ -17,6 +17,7 @@ import { call } from "./support/http";
 import { useMailSink } from "./support/mail";
 import { teamWorkspace, type TestUser } from "./support/users";
 import { VERSION_ROUTES } from "./versions-matrix-cases";
+import { DOCUMENT_ROUTES } from "./documents-matrix-cases";
 
 useMailSink();
 
@@ -73,6 +74,7 @@ const ROUTES: RouteCase[] = [
       call(memberRoute.DELETE, "DELETE", "/", { cookie: s.caller?.cookie, params: { workspaceId: s.workspaceId, userId: s.caller?.id ?? s.ownerId } }),
   },
   ...VERSION_ROUTES,
+  ...DOCUMENT_ROUTES,
 ];
 
 async function setup(who: Who): Promise<Setup> {
