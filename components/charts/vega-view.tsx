@@ -9,7 +9,8 @@ import type { EmbedOptions, Result as EmbedResult, VisualizationSpec } from "veg
 export type Datasets = Record<string, readonly object[]>;
 
 // logLevel 1 = errors only: vega warns about empty extents before the first data arrives.
-const OPTIONS: EmbedOptions = { actions: false, renderer: "svg", logLevel: 1 };
+// Canvas: a recalculation redraws thousands of trace points, which SVG does markedly slower.
+const OPTIONS: EmbedOptions = { actions: false, renderer: "canvas", logLevel: 1 };
 
 export default function VegaView({ spec, datasets, label }: { spec: VisualizationSpec; datasets: Datasets; label: string }) {
   const [view, setView] = useState<EmbedResult["view"] | null>(null);

@@ -21,9 +21,11 @@ export interface BlockCardProps {
   messages: CompileMessage[];
   findings: Finding[];
   peers: Peer[];
+  /** compiled field values of this block (same object while unchanged) */
+  values: Record<string, unknown> | undefined;
 }
 
-export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, messages, findings, peers }: BlockCardProps) {
+export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, messages, findings, peers, values }: BlockCardProps) {
   const { doc, canEdit, focusBlock } = useNotebook();
   const { title, collapsed: sharedCollapsed } = useBlockProps(map, kind);
   // Read-only people cannot write the shared flag: they fold blocks for themselves only.
@@ -68,7 +70,7 @@ export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, 
       </header>
       {collapsed ? null : (
         <div className="px-4 py-3">
-          <BlockBody id={id} kind={kind} map={map} messages={messages} />
+          <BlockBody id={id} kind={kind} map={map} messages={messages} values={values} />
           {isView ? null : <BlockNote id={id} kind={kind} map={map} />}
           <FindingsList findings={findings} messages={blockMessages} />
         </div>

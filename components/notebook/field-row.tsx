@@ -1,7 +1,7 @@
 "use client";
 // One parameter of a block: label, CodeMirror editor bound to its Y.Text (or a select for a
 // choice), the compiled value in the Scenario's unit, and compile messages under it.
-import { useId } from "react";
+import { memo, useId } from "react";
 import { fieldLabel, setParam, type BlockKind, type BlockMap, type ChoiceField, type CompileMessage, type FieldDef } from "@/lib/notebook";
 import { fmtValue } from "@/lib/client/notebook/format";
 import { FieldMessages } from "./field-messages";
@@ -9,13 +9,11 @@ import { useNotebook } from "./notebook-context";
 import { TextEditor } from "./text-editor";
 import { paramsOf, useParamText } from "./use-param-text";
 
-export function FieldRow({ blockId, kind, map, field, messages }: { blockId: string; kind: BlockKind; map: BlockMap; field: FieldDef; messages: CompileMessage[] }) {
-  const { evaluation } = useNotebook();
+export const FieldRow = memo(function FieldRow({ blockId, kind, map, field, messages, value }: { blockId: string; kind: BlockKind; map: BlockMap; field: FieldDef; messages: CompileMessage[]; value: unknown }) {
   const id = useId();
   const label = fieldLabel(kind, field.key);
   const prefix = `${label}: `;
   const own = messages.map((m) => (m.text.startsWith(prefix) ? { ...m, text: m.text.slice(prefix.length) } : m));
-  const value = evaluation.values[blockId]?.[field.key];
   return (
     <div className={`min-w-0 ${field.type === "list" ? "lg:col-span-2" : ""}`} data-field={field.key}>
       <div className="mb-1 flex flex-wrap items-baseline gap-x-2">
@@ -36,7 +34,7 @@ export function FieldRow({ blockId, kind, map, field, messages }: { blockId: str
       <FieldMessages id={`${id}-messages`} messages={own} text={paramsOf(map)?.get(field.key)?.toString() ?? ""} />
     </div>
   );
-}
+});
 
 function TextInput({ map, field, label, invalid, messagesId, blockId }: { map: BlockMap; field: FieldDef; label: string; invalid: boolean; messagesId: string; blockId: string }) {
   const { awareness, undoManager, canEdit, focusBlock, doc } = useNotebook();

@@ -4,7 +4,7 @@ import type { Result } from "@/lib/engine";
 import { fmt } from "@/lib/client/notebook/format";
 import { Cautions, WithResult } from "./result-state";
 import { FindingsSummary } from "./findings-summary";
-import { useNotebook } from "./notebook-context";
+import { useEvaluationState } from "./notebook-context";
 
 interface Figure {
   id: string;
@@ -37,7 +37,7 @@ function figures(r: Result): Figure[] {
 }
 
 export function HeadlineFigures() {
-  const { evaluation } = useNotebook();
+  const evaluation = useEvaluationState();
   return (
     <WithResult>
       {(r) => (

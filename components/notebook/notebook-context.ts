@@ -1,11 +1,11 @@
 "use client";
-// What every block of an open document needs: the shared doc, presence, the person's undo
-// manager, whether they may edit, and the newest evaluation.
+// What every block of an open document needs, in two contexts so that a recalculation re-renders
+// only what shows results: the stable part (shared doc, presence, undo manager, edit right,
+// block list) and the newest evaluation.
 import { createContext, useContext } from "react";
 import type * as Y from "yjs";
 import type { Awareness } from "y-protocols/awareness";
 import type { EvaluationState } from "@/lib/client/notebook/use-evaluation";
-import type { Peer } from "@/lib/client/notebook/presence";
 import type { BlockRef } from "@/lib/client/notebook/use-blocks";
 
 export interface NotebookContextValue {
@@ -13,16 +13,21 @@ export interface NotebookContextValue {
   awareness: Awareness;
   undoManager: Y.UndoManager;
   canEdit: boolean;
-  evaluation: EvaluationState;
   blocks: BlockRef[];
-  peers: Peer[];
   focusBlock: (blockId: string) => void;
 }
 
 export const NotebookContext = createContext<NotebookContextValue | null>(null);
+export const EvaluationContext = createContext<EvaluationState | null>(null);
 
 export function useNotebook(): NotebookContextValue {
   const value = useContext(NotebookContext);
   if (!value) throw new Error("useNotebook outside a notebook");
+  return value;
+}
+
+export function useEvaluationState(): EvaluationState {
+  const value = useContext(EvaluationContext);
+  if (!value) throw new Error("useEvaluationState outside a notebook");
   return value;
 }

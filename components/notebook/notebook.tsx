@@ -12,8 +12,10 @@ import { usePeers } from "@/lib/client/notebook/use-peers";
 import { setFocusedBlock } from "@/lib/client/notebook/presence";
 import { findingsByBlock } from "@/lib/client/notebook/findings";
 import { useSummaryUpload } from "@/lib/client/notebook/use-summary-upload";
+import { useStableEntries } from "@/lib/client/notebook/stable";
+import type { Peer } from "@/lib/client/notebook/presence";
 import { Button } from "@/components/ui/button";
-import { NotebookContext, type NotebookContextValue } from "./notebook-context";
+import { EvaluationContext, NotebookContext, type NotebookContextValue } from "./notebook-context";
 import { BlockCard } from "./block-card";
 import { AddBlockMenu } from "./add-block-menu";
 import { ConnectionBadge } from "./connection-badge";
@@ -35,38 +37,46 @@ export interface NotebookProps {
 
 const NO_FINDINGS: Finding[] = [];
 const NO_MESSAGES: CompileMessage[] = [];
+const NO_PEERS: Peer[] = [];
 
 export function Notebook({ collab, canEdit, archived, role, workspaceId, documentId, fallbackName, fallbackPowertrain }: NotebookProps) {
   const { doc, awareness } = collab;
   const undo = useUndo(doc, canEdit);
-  const evaluation = useEvaluation(collab.synced ? doc : null);
+  const evaluation = useEvaluation(collab.synced ? doc : null, workspaceId);
   const blocks = useBlocks(doc, canEdit);
   const meta = useMeta(doc);
   const peers = usePeers(awareness);
   useSummaryUpload({ doc, enabled: canEdit, workspaceId, documentId, result: evaluation.result, stale: evaluation.stale });
   const focusBlock = useCallback((id: string) => setFocusedBlock(awareness, id), [awareness]);
 
-  const messagesByBlock = useMemo(() => {
+  // Per-block props keep their identity while unchanged, so a recalculation or a cursor move
+  // re-renders only the blocks it concerns (and the result views).
+  const messagesByBlock = useStableEntries(useMemo(() => {
     const m = new Map<string, CompileMessage[]>();
     for (const msg of evaluation.messages) { const k = msg.blockId ?? ""; m.set(k, [...(m.get(k) ?? []), msg]); }
     return m;
-  }, [evaluation.messages]);
-  const findings = useMemo(() => findingsByBlock(evaluation.result && !evaluation.stale ? evaluation.result.findings : [], blocks), [evaluation.result, evaluation.stale, blocks]);
-  const peersByBlock = useMemo(() => {
-    const m = new Map<string, typeof peers>();
+  }, [evaluation.messages]));
+  const findings = useStableEntries(useMemo(
+    () => findingsByBlock(evaluation.result && !evaluation.stale ? evaluation.result.findings : [], blocks),
+    [evaluation.result, evaluation.stale, blocks],
+  ));
+  const peersByBlock = useStableEntries(useMemo(() => {
+    const m = new Map<string, Peer[]>();
     for (const p of peers) if (p.blockId && !p.self) m.set(p.blockId, [...(m.get(p.blockId) ?? []), p]);
     return m;
-  }, [peers]);
+  }, [peers]));
+  const valuesByBlock = useStableEntries(useMemo(() => new Map(Object.entries(evaluation.values)), [evaluation.values]));
 
   const context: NotebookContextValue = useMemo(
-    () => ({ doc, awareness, undoManager: undo.manager, canEdit, evaluation, blocks, peers, focusBlock }),
-    [doc, awareness, undo.manager, canEdit, evaluation, blocks, peers, focusBlock],
+    () => ({ doc, awareness, undoManager: undo.manager, canEdit, blocks, focusBlock }),
+    [doc, awareness, undo.manager, canEdit, blocks, focusBlock],
   );
   const name = meta.name || fallbackName;
   const powertrain = meta.powertrain ?? fallbackPowertrain;
 
   return (
     <NotebookContext.Provider value={context}>
+      <EvaluationContext.Provider value={evaluation}>
       <div className="sticky top-0 z-10 -mx-gutter mb-gutter border-b border-rule bg-paper/95 px-gutter py-3 backdrop-blur">
         <div className="flex flex-wrap items-center gap-x-4 gap-y-2">
           <h1 className="text-xl font-semibold" data-document-name>{name || "Untitled scenario"}</h1>
@@ -97,11 +107,13 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
       <div className="space-y-4">
         {blocks.map((b, i) => (
           <BlockCard key={b.id} id={b.id} kind={b.kind} map={b.map} index={i} count={blocks.length}
-            messages={messagesByBlock.get(b.id) ?? NO_MESSAGES} findings={findings.get(b.id) ?? NO_FINDINGS} peers={peersByBlock.get(b.id) ?? []} />
+            messages={messagesByBlock.get(b.id) ?? NO_MESSAGES} findings={findings.get(b.id) ?? NO_FINDINGS} peers={peersByBlock.get(b.id) ?? NO_PEERS}
+            values={valuesByBlock.get(b.id)} />
         ))}
       </div>
       {canEdit && blocks.length > 0 ? <div className="mt-4"><AddBlockMenu /></div> : null}
       <footer className="mt-section border-t border-rule pt-4"><Cautions /></footer>
+      </EvaluationContext.Provider>
     </NotebookContext.Provider>
   );
 }

@@ -5,7 +5,7 @@ import { useId, useState } from "react";
 import { removeParam, setParam, validParameterName, type BlockMap, type CompileMessage } from "@/lib/notebook";
 import { Button } from "@/components/ui/button";
 import { FieldMessages } from "./field-messages";
-import { useNotebook } from "./notebook-context";
+import { useEvaluationState, useNotebook } from "./notebook-context";
 import { TextEditor } from "./text-editor";
 import { useParamNames, useParamText } from "./use-param-text";
 
@@ -24,7 +24,8 @@ export function ParametersForm({ blockId, map, messages }: { blockId: string; ma
 }
 
 function ParameterRow({ blockId, map, name, messages }: { blockId: string; map: BlockMap; name: string; messages: CompileMessage[] }) {
-  const { awareness, undoManager, canEdit, evaluation, focusBlock, doc } = useNotebook();
+  const { awareness, undoManager, canEdit, focusBlock, doc } = useNotebook();
+  const evaluation = useEvaluationState();
   const text = useParamText(map, name);
   const id = useId();
   const value = evaluation.parameters[name];

@@ -3,10 +3,10 @@
 // dimmed and marked), or the current result.
 import type { ReactNode } from "react";
 import type { Result } from "@/lib/engine";
-import { useNotebook } from "./notebook-context";
+import { useEvaluationState } from "./notebook-context";
 
 export function WithResult({ children }: { children: (result: Result) => ReactNode }) {
-  const { evaluation } = useNotebook();
+  const evaluation = useEvaluationState();
   const errors = evaluation.messages.filter((m) => m.severity === "error").length;
   if (!evaluation.result) {
     return (
