@@ -6,9 +6,9 @@ import { runEvaluation } from "./run-evaluation";
 const scope = self as unknown as { onmessage: ((e: MessageEvent<EvaluateRequest>) => void) | null; postMessage: (m: EvaluateResponse) => void };
 
 scope.onmessage = (event) => {
-  const { id, snapshot } = event.data;
+  const { id, snapshot, library } = event.data;
   try {
-    scope.postMessage(runEvaluation(id, snapshot));
+    scope.postMessage(runEvaluation(id, snapshot, library));
   } catch (error) {
     const text = error instanceof Error ? error.message : String(error);
     scope.postMessage({ id, ok: false, messages: [{ severity: "error", text: `evaluation failed: ${text}` }], values: {}, parameters: {}, elapsed_ms: 0 });

@@ -8,6 +8,8 @@ import { readDoc, type CompileMessage } from "@/lib/notebook";
 import type { Result } from "@/lib/engine";
 import type { CompiledValues, EvaluateRequest, EvaluateResponse, ParameterValues } from "./protocol";
 import { createScheduler } from "./schedule";
+import { createLibraryCache } from "@/lib/library/client-cache";
+import { libraryReferences } from "@/lib/library/references";
 
 export interface EvaluationState {
   /** the last successful result (kept while the document has errors, marked stale) */
@@ -25,15 +27,17 @@ export interface EvaluationState {
 
 const INITIAL: EvaluationState = { result: null, stale: false, messages: [], values: {}, parameters: {}, pending: true, elapsed_ms: null, revision: 0 };
 
-export function useEvaluation(doc: Y.Doc | null): EvaluationState {
+export function useEvaluation(doc: Y.Doc | null, workspaceId?: string): EvaluationState {
   const [state, setState] = useState<EvaluationState>(INITIAL);
   useEffect(() => {
     if (!doc) return;
     const worker = new Worker(new URL("./evaluate.worker.ts", import.meta.url), { type: "module" });
     let nextId = 1;
     let latest = 0;
+    const library = workspaceId ? createLibraryCache(workspaceId, () => scheduler.poke()) : null;
     const scheduler = createScheduler(() => {
-      const request: EvaluateRequest = { id: nextId++, snapshot: readDoc(doc) };
+      const snapshot = readDoc(doc);
+      const request: EvaluateRequest = { id: nextId++, snapshot, library: library?.lookup(libraryReferences(snapshot.blocks)) };
       latest = request.id;
       setState((s) => (s.pending ? s : { ...s, pending: true }));
       worker.postMessage(request);
@@ -65,6 +69,6 @@ export function useEvaluation(doc: Y.Doc | null): EvaluationState {
       scheduler.dispose();
       worker.terminate();
     };
-  }, [doc]);
+  }, [doc, workspaceId]);
   return state;
 }

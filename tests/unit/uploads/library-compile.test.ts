@@ -48,3 +48,41 @@ describe("library cycles in the notebook compile", () => {
     expect(without.messages.some((m) => m.field === "library_id" && m.text.includes("not available yet"))).toBe(true);
   });
 });
+
+describe("library cycles in the notebook's live evaluation", () => {
+  it("runEvaluation uses the library entries sent with the request", async () => {
+    const { runEvaluation } = await import("@/lib/client/notebook/run-evaluation");
+    const { snap } = docWithLibraryCycle("c-1");
+    const out = runEvaluation(1, snap, { "c-1": { dt_s: 10, speed_kmh: [0, 36, 36, 0] } });
+    expect(out.ok).toBe(true);
+    if (out.ok) expect(out.result.kpi.distance_km).toBeCloseTo(0.2, 12);
+    const loading = runEvaluation(2, snap, {});
+    expect(loading.ok).toBe(false);
+    expect(loading.messages.some((m) => m.field === "library_id" && m.text.includes("loading the cycle from the library"))).toBe(true);
+  });
+
+  it("the browser cache fetches each id once, then re-runs with the data", async () => {
+    const { createLibraryCache } = await import("@/lib/library/client-cache");
+    const id = "0b9c1d2e-3f40-4a5b-8c6d-7e8f90a1b2c3";
+    const calls: string[] = [];
+    const fetchStub = async (url: string) => {
+      calls.push(url);
+      return new Response(JSON.stringify({ item: { kind: "cycle", name: "x", data: { dt_s: 1, speed_kmh: [0, 1] } } }), { status: 200 });
+    };
+    const original = globalThis.fetch;
+    globalThis.fetch = fetchStub as unknown as typeof fetch;
+    try {
+      let reruns = 0;
+      const cache = createLibraryCache("w-1", () => { reruns++; });
+      expect(cache.lookup([id])[id]).toBe("loading the cycle from the library…");
+      expect(cache.lookup([id])[id]).toBe("loading the cycle from the library…");
+      await new Promise((r) => setTimeout(r, 0));
+      expect(reruns).toBe(1);
+      expect(cache.lookup([id])[id]).toEqual({ dt_s: 1, speed_kmh: [0, 1] });
+      expect(calls).toEqual([`/api/workspaces/w-1/library/${id}`]);
+      expect(cache.lookup(["not-an-id"])["not-an-id"]).toBe('"not-an-id" is not a library id (copy it from the Library page)');
+    } finally {
+      globalThis.fetch = original;
+    }
+  });
+});
