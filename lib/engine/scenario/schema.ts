@@ -93,6 +93,10 @@ export const strategySchema = z.discriminatedUnion("kind", [
     soc_low: fraction.optional(),
     soc_high: fraction.optional(),
     charge_power_kw: nonNegative.default(1),
+    // Optional load-point shifting (docs/strategies.md): while charging, raise the engine
+    // torque towards this fraction of its full-load torque (its efficient region) instead
+    // of adding charge_power_kw. Absent: the fixed charge power above.
+    shift_torque_fraction: fraction.optional(),
   }),
   z.strictObject({
     kind: z.literal("ecms"),

@@ -71,6 +71,9 @@ const DEFAULT_WINDOW = 0.0005;
 /** ECMS bisection tolerance on the final SOC for the comparison. */
 const ECMS_TOLERANCE_SOC = 2e-4;
 
+/** Parallel rule for the comparison when the scenario has none (docs/strategies.md). */
+const DEFAULT_RULE = { electric_speed_max_kmh: 50, charge_power_kw: 1, soc_low: undefined, soc_high: undefined, shift_torque_fraction: 0.8 };
+
 /** Baseline causal strategy: the scenario's own rule / thermostat, else documented defaults (docs/strategies.md). */
 function baseline(s: Scenario, plant: HybridPlant): Strategy {
   const b = s.battery!;
@@ -82,12 +85,13 @@ function baseline(s: Scenario, plant: HybridPlant): Strategy {
     const off = Math.min(b.soc_max, b.soc_initial + 0.05 * span);
     return new ThermostatStrategy(plant, on, off, 0.5 * s.generator!.peak_power_kw * W_PER_KW);
   }
-  const rule = st?.kind === "rule" ? st : { electric_speed_max_kmh: 50, charge_power_kw: 1, soc_low: undefined, soc_high: undefined };
+  const rule = st?.kind === "rule" ? st : DEFAULT_RULE;
   return new ParallelRuleStrategy(plant as ParallelPlant, {
     electricSpeedMax_kmh: rule.electric_speed_max_kmh,
     socLow: rule.soc_low ?? b.soc_min + 0.3 * span,
     socHigh: rule.soc_high ?? b.soc_min + 0.7 * span,
     charge_w: rule.charge_power_kw * W_PER_KW,
+    shiftTorqueFraction: rule.shift_torque_fraction,
   });
 }
 

@@ -33,6 +33,7 @@ export function makeStrategy(s: Scenario, plant: Plant, run: DpRunOptions = {}):
         socLow: spec.soc_low ?? b.soc_min + 0.3 * span,
         socHigh: spec.soc_high ?? b.soc_min + 0.7 * span,
         charge_w: spec.charge_power_kw * W_PER_KW,
+        shiftTorqueFraction: spec.shift_torque_fraction,
       }),
     };
   }

@@ -8,6 +8,8 @@ export interface ParallelRuleParams {
   socLow: number;
   socHigh: number;
   charge_w: number;
+  /** Load-point shifting target as a fraction of full-load torque; undefined: fixed charge power. */
+  shiftTorqueFraction?: number;
 }
 
 /**
@@ -20,6 +22,10 @@ export interface ParallelRuleParams {
  *    (load-point shift) with charge_power_kw scaled by (soc_high − SOC)/(soc_high − soc_low),
  *    capped at 1: a proportional pull towards the band, within the engine's full-load
  *    headroom and the battery's charge limit; at or above soc_high the engine alone drives.
+ *    With `shiftTorqueFraction` (load-point shifting, docs/strategies.md) the charge torque
+ *    instead lifts the engine towards that fraction of its full-load torque, where a Willans
+ *    engine is most efficient (brake efficiency e·P/(P + P_0) rises with load), times the
+ *    same pull, within the motor's torque and the battery's charge limit.
  * Every choice is made inside the limits, so the rule never creates an infeasible step on
  * its own; what the hardware cannot do still shows up as findings.
  */
@@ -55,7 +61,9 @@ export class ParallelRuleStrategy implements Strategy {
     } else if (soc < this.p.socHigh) {
       const byBattery = ((b.chargeLimit_w(soc, d.dt_s) - aux) / m.efficiency) / w; // ≤ 0
       const pull = Math.min(1, (this.p.socHigh - soc) / Math.max(1e-9, this.p.socHigh - this.p.socLow));
-      const charge = Math.min((pull * this.p.charge_w) / w, limit, fullLoad - demand, -byBattery);
+      const shift = this.p.shiftTorqueFraction;
+      const wanted = shift === undefined ? (pull * this.p.charge_w) / w : pull * (shift * fullLoad - demand);
+      const charge = Math.min(wanted, limit, fullLoad - demand, -byBattery);
       t = charge > 0 ? -charge : 0;
     }
     ctl[1] = t;
