@@ -6,6 +6,8 @@ import { SignOutButton } from "@/components/shell/sign-out-button";
 import { UserPage } from "@/components/shell/user-page";
 import { Panel } from "@/components/ui/panel";
 import { PageTitle } from "@/components/ui/page-title";
+import { NotificationSettingsForm } from "@/components/reviews/notification-settings";
+import { getNotificationSettings } from "@/db/notifications";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -24,6 +26,9 @@ export default async function AccountPage() {
         </Panel>
         <Panel title="Password">
           <PasswordForm />
+        </Panel>
+        <Panel title="E-mail notifications" description="Design reviews: which e-mails you want. Links in them lead back to the version, comparison or review.">
+          <NotificationSettingsForm initial={await getNotificationSettings({ userId: user.id })} />
         </Panel>
         <Panel title="API tokens" description="Personal tokens for scripts and the evaluate API: scoped to one workspace, shown once, revocable.">
           <a className="text-sm underline" href="/account/tokens">Manage API tokens</a>

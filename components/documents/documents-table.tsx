@@ -8,6 +8,7 @@ import { POWERTRAIN_LABELS } from "@/lib/notebook";
 import type { DocumentRow, DocumentSort, SummaryKpiKey } from "@/lib/client/notebook/documents-api";
 import { KPI_CHOICES, kpiCell } from "./kpi";
 import { sinceText } from "./when";
+import { ReviewStateBadge } from "@/components/reviews/review-state-badge";
 
 export interface TableActions {
   workspaceId: string;
@@ -71,6 +72,7 @@ const columns = helper.columns([
   helper.accessor("name", { header: "Name", cell: (info) => <NameCell row={info.row.original} /> }),
   helper.accessor("powertrain", { header: "Powertrain", cell: (info) => <span className="text-ink-soft">{POWERTRAIN_LABELS[info.getValue()]}</span> }),
   helper.display({ id: "kpi", header: "Headline figure", cell: (info) => <KpiCell row={info.row.original} /> }),
+  helper.display({ id: "review", header: "Review", cell: (info) => (info.row.original.review ? <ReviewStateBadge state={info.row.original.review.state} prefix={`v${info.row.original.review.versionNumber}`} /> : <span className="text-muted">—</span>) }),
   helper.accessor("updatedAt", { header: "Updated", cell: (info) => <time dateTime={info.getValue()} className="text-ink-soft">{sinceText(info.getValue())}</time> }),
   helper.display({ id: "actions", header: () => <span className="sr-only">Actions</span>, cell: (info) => <ActionsCell row={info.row.original} /> }),
 ]);

@@ -22,6 +22,8 @@ export interface DocumentRow {
   archived: boolean;
   archivedAt: string | null;
   summary: { kpi: SummaryKpi; computedAt?: string } | null;
+  /** latest review round (lib/versions): its state and the version it reviews */
+  review?: { state: "open" | "approved" | "changes_requested"; versionNumber: number } | null;
 }
 
 export type DocumentSort = "name" | "updated" | "powertrain" | "kpi";

@@ -2,6 +2,7 @@
 // template of a powertrain (lib/notebook), stored as its first snapshot.
 import { createDocumentFromDoc } from "@/db/document-updates";
 import { getWorkspaceDocument, listDocuments } from "@/db/documents";
+import { latestRoundStates } from "@/db/reviews";
 import { authorizeWorkspace } from "@/lib/authz";
 import { Unprocessable } from "@/lib/http/errors";
 import { fieldMessages, json, route } from "@/lib/http/route";
@@ -22,7 +23,12 @@ export const GET = route<Params>({}, async (ctx) => {
   const rows = await listDocuments({
     workspaceId: ctx.params.workspaceId, query: q.q || undefined, archived: q.archived === "1", sort: q.sort, direction, kpiKey: q.kpi,
   });
-  return json({ documents: rows.map(documentJson) });
+  const reviews = await latestRoundStates({ documentIds: rows.map((r) => r.id) });
+  const review = (id: string) => {
+    const r = reviews.get(id);
+    return r ? { state: r.state, versionNumber: r.versionNumber } : null;
+  };
+  return json({ documents: rows.map((r) => ({ ...documentJson(r), review: review(r.id) })) });
 });
 
 export const POST = route<Params, typeof createDocumentSchema>({ body: createDocumentSchema }, async (ctx, body) => {

@@ -5,6 +5,7 @@ import { can } from "@/lib/authz/policy";
 import { isUuid } from "@/lib/authz";
 import { loadWorkspace } from "@/components/workspace/load-workspace";
 import { NotebookClient } from "@/components/notebook/notebook-client";
+import { DocumentReviewBar } from "@/components/reviews/document-review-bar";
 
 export const metadata: Metadata = { title: "Scenario" };
 
@@ -17,6 +18,8 @@ export default async function DocumentPage({ params }: { params: Promise<{ works
   // Read per request: the same build runs against the demo's and the tests' collaboration ports.
   const collabUrl = process.env.COLLAB_URL ?? null;
   return (
+    <>
+    <DocumentReviewBar workspaceId={workspaceId} documentId={documentId} />
     <NotebookClient
       workspaceId={workspaceId}
       documentId={documentId}
@@ -28,5 +31,6 @@ export default async function DocumentPage({ params }: { params: Promise<{ works
       name={document.name}
       powertrain={document.powertrain}
     />
+    </>
   );
 }
