@@ -10,8 +10,9 @@ import { countDocumentSnapshots, countDocumentUpdates, createDocumentFromDoc, lo
 import { getDocument, setDocumentArchived } from "@/db/documents";
 import { createScenarioDoc, insertBlock, readDoc, setParam, blocksOf } from "@/lib/notebook";
 import { startCollabServer, type CollabServer } from "@/server/collab/server";
+import * as documentRoute from "@/app/api/workspaces/[workspaceId]/documents/[documentId]/route";
 import { connectClient, tryUpgrade, waitFor, whenSynced, type CollabClient } from "./support/collab";
-import { APP } from "./support/http";
+import { APP, call } from "./support/http";
 import { teamWorkspace } from "./support/users";
 
 const COMPACT_THRESHOLD = 25;
@@ -248,6 +249,20 @@ describe("collaboration server", () => {
     const c = await client(id, team.viewer.cookie);
     expect(c.doc.getText("t").toString()).toBe("kept");
     close(c);
+  });
+
+  it("hands a rename through the API to clients that have the document open", async () => {
+    const id = await newDocument("Old name");
+    const viewer = await client(id, team.viewer.cookie);
+    process.env.COLLAB_URL = url;
+    try {
+      const res = await call(documentRoute.PATCH, "PATCH", "/", { cookie: team.editor.cookie, params: { workspaceId: team.workspaceId, documentId: id }, body: { name: "New name" } });
+      expect(res.status).toBe(200);
+    } finally {
+      delete process.env.COLLAB_URL;
+    }
+    await waitFor(viewer.doc, (d) => readDoc(d).name === "New name", "the new name at the open client");
+    close(viewer);
   });
 
   it("touches documents.updated_at when edits arrive", async () => {
