@@ -1,6 +1,5 @@
 "use client";
-// "Add block": a menu of block kinds, grouped. Kinds whose results the engine cannot produce yet
-// (the strategy comparison needs ECMS and DP) are left out until they can.
+// "Add block": a menu of block kinds, grouped.
 import { useEffect, useRef, useState } from "react";
 import { BLOCK_TITLES, insertBlock, type BlockKind } from "@/lib/notebook";
 import { Button } from "@/components/ui/button";
@@ -10,7 +9,7 @@ import { jumpToBlock } from "./jump";
 const GROUPS: { title: string; kinds: BlockKind[] }[] = [
   { title: "Scenario", kinds: ["drive_cycle", "body", "driveline", "engine", "electric_machine", "generator_set", "battery_pack", "energy_manager"] },
   { title: "Working notes", kinds: ["parameters", "note"] },
-  { title: "Results", kinds: ["headline_figures", "loss_ledger", "energy_flow", "traces", "operating_points"] },
+  { title: "Results", kinds: ["headline_figures", "loss_ledger", "energy_flow", "traces", "operating_points", "strategy_comparison"] },
 ];
 
 export function AddBlockMenu({ index }: { index?: number }) {

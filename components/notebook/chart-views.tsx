@@ -7,6 +7,8 @@ import { flowRows, fullLoadCurve, operatingPoints, tracePanels } from "@/lib/cli
 import { Chart } from "@/components/charts/chart";
 import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, tracesSpec } from "@/components/charts/specs";
 import { WithResult } from "./result-state";
+import { useEvaluationState } from "./notebook-context";
+import { StrategyComparisonRunner } from "@/components/strategy";
 
 export function EnergyFlow() {
   return <WithResult>{(r) => <FlowBody result={r} />}</WithResult>;
@@ -51,11 +53,8 @@ function PointsBody({ result }: { result: Result }) {
   );
 }
 
+/** Rule vs ECMS vs DP on the current scenario, run on demand in its own worker (components/strategy). */
 export function StrategyComparison() {
-  return (
-    <p className="rounded-control border border-dashed border-rule-strong px-4 py-5 text-sm text-muted">
-      The comparison of rule-based, ECMS and dynamic-programming strategies arrives with the energy-management work.
-      This block will fill in by itself then.
-    </p>
-  );
+  const evaluation = useEvaluationState();
+  return <StrategyComparisonRunner scenario={evaluation.stale ? null : evaluation.scenario} />;
 }

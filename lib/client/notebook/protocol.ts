@@ -1,7 +1,7 @@
 // Messages between the notebook page and its evaluation worker. Plain JSON-like data only
 // (structured clone): the worker owns no Yjs state, it gets a snapshot of the document.
 import type { CompileMessage, DocSnapshot, LibraryCycle } from "@/lib/notebook";
-import type { Result } from "@/lib/engine";
+import type { Result, Scenario } from "@/lib/engine";
 
 export interface EvaluateRequest {
   id: number;
@@ -24,4 +24,5 @@ interface Common {
   elapsed_ms: number;
 }
 
-export type EvaluateResponse = (Common & { ok: true; result: Result }) | (Common & { ok: false });
+/** On success also the compiled Scenario (validated by the engine), for views that run more (strategy comparison). */
+export type EvaluateResponse = (Common & { ok: true; result: Result; scenario: Scenario }) | (Common & { ok: false });

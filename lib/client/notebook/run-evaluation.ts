@@ -3,7 +3,7 @@
 // field that wrote the offending Scenario value, like compile's own messages.
 import { compile, describeDimension, findUnit, fromSI, type CompileMessage, type DocSnapshot, type LibraryCycle, type ParameterResult, type SourceTable } from "@/lib/notebook";
 import { pathKey } from "@/lib/notebook/compile-types";
-import { evaluateScenarioInput, type ScenarioError } from "@/lib/engine";
+import { evaluateScenarioInput, type Scenario, type ScenarioError } from "@/lib/engine";
 import type { CompiledValues, EvaluateResponse, ParameterValues } from "./protocol";
 
 function engineMessage(error: ScenarioError, sources: SourceTable): CompileMessage {
@@ -47,5 +47,5 @@ export function runEvaluation(id: number, snapshot: DocSnapshot, library?: Recor
     const messages = [...compiled.messages, ...outcome.errors.map((e) => engineMessage(e, compiled.sources))];
     return { id, ok: false, messages, values, parameters, elapsed_ms: elapsed() };
   }
-  return { id, ok: true, result: outcome.result, messages: compiled.messages, values, parameters, elapsed_ms: elapsed() };
+  return { id, ok: true, result: outcome.result, scenario: compiled.scenario as unknown as Scenario, messages: compiled.messages, values, parameters, elapsed_ms: elapsed() };
 }

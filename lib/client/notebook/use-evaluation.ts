@@ -5,7 +5,7 @@
 import { useEffect, useState } from "react";
 import type * as Y from "yjs";
 import { readDoc, type CompileMessage } from "@/lib/notebook";
-import type { Result } from "@/lib/engine";
+import type { Result, Scenario } from "@/lib/engine";
 import type { CompiledValues, EvaluateRequest, EvaluateResponse, ParameterValues } from "./protocol";
 import { createScheduler } from "./schedule";
 import { createLibraryCache } from "@/lib/library/client-cache";
@@ -14,6 +14,8 @@ import { libraryReferences } from "@/lib/library/references";
 export interface EvaluationState {
   /** the last successful result (kept while the document has errors, marked stale) */
   result: Result | null;
+  /** the Scenario the result was computed from */
+  scenario: Scenario | null;
   /** true when the newest evaluation failed and `result` belongs to an earlier state */
   stale: boolean;
   messages: CompileMessage[];
@@ -25,7 +27,7 @@ export interface EvaluationState {
   revision: number;
 }
 
-const INITIAL: EvaluationState = { result: null, stale: false, messages: [], values: {}, parameters: {}, pending: true, elapsed_ms: null, revision: 0 };
+const INITIAL: EvaluationState = { result: null, scenario: null, stale: false, messages: [], values: {}, parameters: {}, pending: true, elapsed_ms: null, revision: 0 };
 
 export function useEvaluation(doc: Y.Doc | null, workspaceId?: string): EvaluationState {
   const [state, setState] = useState<EvaluationState>(INITIAL);
@@ -48,6 +50,7 @@ export function useEvaluation(doc: Y.Doc | null, workspaceId?: string): Evaluati
       if (answer.id !== latest) return;
       setState((s) => ({
         result: answer.ok ? answer.result : s.result,
+        scenario: answer.ok ? answer.scenario : s.scenario,
         stale: !answer.ok && s.result !== null,
         messages: answer.messages,
         values: answer.values,
