@@ -103,8 +103,9 @@ function stepRow(t: CandidateTables, bs: BatteryStep, c: CostToGo, g: GridTables
   const row = k * c.stride, next = (k + 1) * c.stride;
   const first = t.start[k], last = t.start[k + 1];
   const brakes = t.braking[k] !== 0;
+  const sc = g.scratch;
   for (let i = 0; i < m; i++) {
-    const s = g.soc[i], u = g.u[i], u2 = u * u, cl = g.chargeLimit[i], peakI = g.peakCurrent[i];
+    const s = g.soc[i], u = g.u[i], cl = g.chargeLimit[i], peakI = g.peakCurrent[i];
     // Landing in [lo1, hi1] ⟺ (s − hi1)/Δ ≤ I ≤ (s − lo1)/Δ, with Δ = SOC per ampere.
     const iUp = (s - lo1 + EDGE_TOL) / perAmp;
     const iDown = (s - hi1 - EDGE_TOL) / perAmp;
@@ -114,13 +115,24 @@ function stepRow(t: CandidateTables, bs: BatteryStep, c: CostToGo, g: GridTables
     if (iDown > peakI) pLo = Infinity;
     else { const pw = power(u, rOhm, iDown); if (pw > pLo) pLo = pw; }
     const base = s - perAmp * (linear ? 0 : u / (2 * rOhm));
+    sc[4 * i] = pLo;
+    sc[4 * i + 1] = pHi;
+    sc[4 * i + 2] = u * u;
+    sc[4 * i + 3] = (base - s0) * invH;
+  }
+  if (!brakes && !linear) {
+    const hs = half * invH;
+    let i = 0;
+    for (; i + 1 < m; i += 2) bestPair(J, next, row + i, sc, 4 * i, stage, bus, first, last, r4, hs);
+    if (i < m) J[row + i] = bestNonBraking(J, next, stage, bus, first, last, sc[4 * i], sc[4 * i + 1], sc[4 * i + 2], r4, sc[4 * i + 3], hs);
+    return;
+  }
+  for (let i = 0; i < m; i++) {
+    const s = g.soc[i], u = g.u[i], u2 = u * u, cl = g.chargeLimit[i];
+    const pLo = sc[4 * i], pHi = sc[4 * i + 1];
+    const base = s - perAmp * (linear ? 0 : u / (2 * rOhm));
     const perWatt = linear ? perAmp / u : 0;
     let best: number;
-    if (!brakes && !linear) {
-      best = bestNonBraking(J, next, stage, bus, first, last, pLo, pHi, u2, r4, (base - s0) * invH, half * invH);
-      J[row + i] = best;
-      continue;
-    }
     best = Infinity;
     for (let slot = first; slot < last; slot++) {
       let p = bus[slot];
@@ -166,4 +178,39 @@ function bestNonBraking(J: Float64Array, next: number, stage: Float64Array, bus:
     if (cost < best) best = cost;
   }
   return best;
+}
+
+/**
+ * bestNonBraking for two neighbouring grid points at once: each candidate's bus power and
+ * stage cost are read once for both, and the two independent chains keep the CPU busier.
+ * `sc` holds per grid point [pLo, pHi, U², b0]; writes the two minima to J[out], J[out + 1].
+ */
+function bestPair(J: Float64Array, next: number, out: number, sc: Float64Array, o: number, stage: Float64Array, bus: Float64Array,
+  first: number, last: number, r4: number, hs: number): void {
+  const loA = sc[o], hiA = sc[o + 1], u2A = sc[o + 2], b0A = sc[o + 3];
+  const loB = sc[o + 4], hiB = sc[o + 5], u2B = sc[o + 6], b0B = sc[o + 7];
+  let bestA = Infinity, bestB = Infinity;
+  for (let slot = first; slot < last; slot++) {
+    const p = bus[slot];
+    const st = stage[slot];
+    const q = r4 * p;
+    if (p <= hiA && p >= loA) {
+      const d = u2A - q;
+      const pos = b0A + hs * Math.sqrt(d > 0 ? d : 0);
+      const idx = pos | 0;
+      const a = J[next + idx];
+      const cost = st + a + (pos - idx) * (J[next + idx + 1] - a);
+      if (cost < bestA) bestA = cost;
+    }
+    if (p <= hiB && p >= loB) {
+      const d = u2B - q;
+      const pos = b0B + hs * Math.sqrt(d > 0 ? d : 0);
+      const idx = pos | 0;
+      const a = J[next + idx];
+      const cost = st + a + (pos - idx) * (J[next + idx + 1] - a);
+      if (cost < bestB) bestB = cost;
+    }
+  }
+  J[out] = bestA;
+  J[out + 1] = bestB;
 }

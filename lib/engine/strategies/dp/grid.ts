@@ -11,6 +11,8 @@ export interface GridTables {
   dischargeLimit: Float64Array;
   /** U/(2R): the current of peak power (Infinity when R = 0). */
   peakCurrent: Float64Array;
+  /** Per-row work space of the backward pass: [pLo, pHi, U², b0] per grid point. */
+  scratch: Float64Array;
 }
 
 export function gridTables(bs: BatteryStep, c: CostToGo, dt_s: number): GridTables {
@@ -19,7 +21,7 @@ export function gridTables(bs: BatteryStep, c: CostToGo, dt_s: number): GridTabl
   const buf = new Float64Array(5 * m);
   const g: GridTables = {
     soc: buf.subarray(0, m), u: buf.subarray(m, 2 * m), chargeLimit: buf.subarray(2 * m, 3 * m),
-    dischargeLimit: buf.subarray(3 * m, 4 * m), peakCurrent: buf.subarray(4 * m),
+    dischargeLimit: buf.subarray(3 * m, 4 * m), peakCurrent: buf.subarray(4 * m), scratch: new Float64Array(4 * m),
   };
   for (let i = 0; i < m; i++) {
     const s = i === m - 1 ? b.socMax : c.soc0 + i * c.h;
