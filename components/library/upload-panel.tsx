@@ -30,10 +30,14 @@ export function UploadPanel({ workspaceId }: { workspaceId: string }) {
   const [preview, setPreview] = useState<UploadPreview | null>(null);
   const [conf, setConf] = useState<Conf | null>(null);
   const [name, setName] = useState("");
+  // the name follows the chosen file until the user types one
+  const [nameTyped, setNameTyped] = useState(false);
   const [source, setSource] = useState("");
   const [busy, setBusy] = useState(false);
   const [message, setMessage] = useState<string | null>(null);
   const [saveIssues, setSaveIssues] = useState<UploadIssue[]>([]);
+  // a new key clears the file input after a save
+  const [inputKey, setInputKey] = useState(0);
 
   async function run(k: LibraryKind, f: File, c: Conf | null) {
     setBusy(true);
@@ -59,7 +63,7 @@ export function UploadPanel({ workspaceId }: { workspaceId: string }) {
     setPreview(null);
     setConf(null);
     if (f) {
-      if (!name) setName(f.name.replace(/\.[^.]+$/, ""));
+      if (!nameTyped) setName(f.name.replace(/\.[^.]+$/, ""));
       void run(k, f, null);
     }
   }
@@ -71,7 +75,7 @@ export function UploadPanel({ workspaceId }: { workspaceId: string }) {
       const out = await saveUpload(workspaceId, kind, file, conf, name, source);
       if (out.ok) {
         await queryClient.invalidateQueries({ queryKey: libraryKey(workspaceId) });
-        setFile(null); setPreview(null); setConf(null); setName(""); setSource("");
+        setFile(null); setPreview(null); setConf(null); setName(""); setNameTyped(false); setSource(""); setInputKey((k) => k + 1);
         setMessage("Saved to the library.");
       } else {
         setSaveIssues(out.issues);
@@ -97,7 +101,7 @@ export function UploadPanel({ workspaceId }: { workspaceId: string }) {
         </label>
         <label className="flex flex-col gap-1 text-sm">
           <span className="font-medium">CSV or TSV file (UTF-8, at most 5 MiB)</span>
-          <input type="file" accept=".csv,.tsv,.txt,text/csv,text/tab-separated-values,text/plain" onChange={(e) => choose(e.target.files?.[0] ?? null)} className="text-sm" />
+          <input key={inputKey} type="file" accept=".csv,.tsv,.txt,text/csv,text/tab-separated-values,text/plain" onChange={(e) => choose(e.target.files?.[0] ?? null)} className="text-sm" />
         </label>
       </div>
       {proposal?.notes?.length ? <ul className="list-disc pl-5 text-sm text-ink-soft">{proposal.notes.map((n) => <li key={n}>{n}</li>)}</ul> : null}
@@ -119,7 +123,7 @@ export function UploadPanel({ workspaceId }: { workspaceId: string }) {
           <div className="grid gap-3 sm:grid-cols-2">
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Name</span>
-              <input className="rounded-control border border-rule-strong px-3 py-2" value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />
+              <input className="rounded-control border border-rule-strong px-3 py-2" value={name} onChange={(e) => { setName(e.target.value); setNameTyped(true); }} maxLength={120} />
             </label>
             <label className="flex flex-col gap-1 text-sm">
               <span className="font-medium">Source note</span>

@@ -1,0 +1,71 @@
+// Issue 7 in a real browser: upload a drive cycle (with a unit the header does not give, so the
+// user confirms it), see the preview, statistics and label, fix a broken file's message, save,
+// find it in the library list; then create an API token, see it once, and evaluate with it.
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { openPerson, screenshot, appUrl, type Person } from "./support/browser";
+import { ConsoleWatch } from "./support/console-watch";
+import { fillSignUp, gotoApp, newAccount, pathOf } from "./support/flows";
+
+const GOOD = "time,speed\n0,0\n10,10\n20,10\n30,0\n";
+const BROKEN = "time [s],speed [km/h]\n0,0\n1,fast\n2,2\n";
+
+describe("team library and API tokens in the browser", () => {
+  let person: Person;
+  let watch: ConsoleWatch;
+  beforeAll(async () => {
+    person = await openPerson();
+    watch = new ConsoleWatch(person.page);
+  });
+  afterAll(async () => person?.close());
+
+  test("upload, confirm the unit, save; then a token that evaluates", async () => {
+    const page = person.page;
+    await gotoApp(page, "/sign-up");
+    await fillSignUp(page, newAccount("Uploader"));
+    await page.waitForURL("**/workspaces/new");
+    await page.getByLabel("Workspace name").fill(`Library ${Date.now().toString(36)}`);
+    await page.getByRole("button", { name: "Create workspace" }).click();
+    await page.waitForURL(/\/w\/[0-9a-f-]{36}$/);
+    const workspacePath = pathOf(page);
+
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Library" }).click();
+    await page.waitForURL(`**${workspacePath}/library`);
+    await page.getByText("The library is empty.").waitFor();
+
+    // a broken file: the message names line 3, column 2
+    await page.getByLabel(/CSV or TSV file/).setInputFiles({ name: "broken.csv", mimeType: "text/csv", buffer: Buffer.from(BROKEN) });
+    await page.getByText('line 3, column 2 (speed [km/h]): "fast" is not a number').waitFor();
+    await screenshot(page, "library-01-issue");
+
+    // a good file whose header has no units: the guess (km/h) is noted; the user picks m/s
+    await page.getByLabel(/CSV or TSV file/).setInputFiles({ name: "depot.csv", mimeType: "text/csv", buffer: Buffer.from(GOOD) });
+    await page.getByText('speed unit not given in "speed"; assumed km/h').waitFor();
+    await page.getByText("0.056 km").waitFor(); // trapezoids (5 + 10 + 5)·10 s = 200 km/h·s = 55.6 m
+    await page.locator("select").filter({ has: page.locator("option[value='mph']") }).selectOption("m/s");
+    await page.getByText("0.200 km").waitFor(); // the same numbers in m/s: 200 m
+    await page.getByText("published cycles are checked at 1 Hz; this cycle has a 10 s step").waitFor();
+    await screenshot(page, "library-02-preview");
+    await page.getByLabel("Source note").fill("logged on the depot loop");
+    await page.getByRole("button", { name: "Save to the library" }).click();
+    await page.getByRole("cell", { name: /^depot/ }).waitFor();
+    expect(await page.locator("table").innerText()).toContain("logged on the depot loop");
+    expect(await page.locator("table").innerText()).toContain("not used");
+    await screenshot(page, "library-03-saved");
+
+    // an API token, shown once, that evaluates a scenario
+    await gotoApp(page, "/account/tokens");
+    await page.getByLabel("Name").fill("nightly");
+    await page.getByRole("button", { name: "Create token" }).click();
+    const token = await page.getByTestId("new-token").innerText();
+    expect(token).toMatch(/^jb_/);
+    await screenshot(page, "tokens-01-created");
+    const scenario = { format: "joulebook.scenario/1", name: "t", powertrain: "bev", cycle: { standard: "ece15" },
+      vehicle: { mass_kg: 1500, rotating_mass_factor: 0.05, drag_coefficient: 0.3, frontal_area_m2: 2.2, rolling_resistance: 0.01, wheel_radius_m: 0.31 },
+      driveline: { gear_ratios: [1], final_drive_ratio: 8, efficiency: 0.95 },
+      motor: { peak_power_kw: 80, peak_torque_nm: 250, max_speed_rpm: 12000, efficiency: 0.9 },
+      battery: { capacity_ah: 60, ocv: { soc: [0, 1], voltage_v: [330, 400] }, resistance_ohm: 0.1, soc_initial: 0.8, soc_min: 0.1, soc_max: 0.95, max_discharge_c: 5, max_charge_c: 3 } };
+    const res = await fetch(appUrl("/api/evaluate"), { method: "POST", headers: { authorization: `Bearer ${token}`, "content-type": "application/json" }, body: JSON.stringify(scenario) });
+    expect(res.status).toBe(200);
+    expect(watch.take()).toEqual([]);
+  });
+});
