@@ -1,0 +1,73 @@
+// Result → chart rows, on real engine results of the notebook templates: the energy-flow columns
+// balance exactly when the ledger closes (DESIGN §4), every row is finite, traces stay in budget.
+import { describe, expect, test } from "vitest";
+import { compile, createScenarioDoc, readDoc, POWERTRAINS } from "@/lib/notebook";
+import { evaluateScenarioInput, type Result } from "@/lib/engine";
+import { flowRows, ledgerRows, operatingPoints, thin, tracePanels, TRACE_BUDGET } from "@/lib/client/notebook/chart-data";
+import { blockKindOfFinding } from "@/lib/client/notebook/findings";
+
+function resultOf(powertrain: (typeof POWERTRAINS)[number]): Result {
+  const compiled = compile(readDoc(createScenarioDoc(powertrain, "t")));
+  if (!compiled.scenario) throw new Error(compiled.messages.map((m) => m.text).join("; "));
+  const out = evaluateScenarioInput(compiled.scenario);
+  if (!out.ok) throw new Error(out.errors.map((e) => e.message).join("; "));
+  return out.result;
+}
+
+describe.each(POWERTRAINS)("chart rows for the %s template", (powertrain) => {
+  const result = resultOf(powertrain);
+
+  test("energy in equals energy out (the ledger closes), every value finite", () => {
+    const rows = flowRows(result);
+    const sum = (c: string) => rows.filter((r) => r.column === c).reduce((s, r) => s + r.kwh, 0);
+    for (const r of rows) expect(Number.isFinite(r.kwh) && r.kwh >= 0).toBe(true);
+    expect(Math.abs(sum("Energy in") - sum("Energy out"))).toBeLessThan(1e-6 * sum("Energy in") + 1e-9);
+  });
+
+  test("ledger shares sum to the input: supplies 100 %, sinks 100 % (up to the pack's sign)", () => {
+    const rows = ledgerRows(result);
+    for (const r of rows) expect(Number.isFinite(r.j)).toBe(true);
+    const sinks = rows.filter((r) => r.side === "sink").reduce((s, r) => s + r.j, 0);
+    const supplies = rows.filter((r) => r.side === "supply").reduce((s, r) => s + r.j, 0);
+    expect(Math.abs(sinks - supplies)).toBeLessThan(1e-9 * Math.abs(supplies) + 1e-6);
+  });
+
+  test("trace panels are finite and within the point budget", () => {
+    const panels = tracePanels(result);
+    expect(panels[0]!.id).toBe("trace_speed");
+    expect(panels.some((p) => p.id === "trace_soc")).toBe(powertrain !== "conventional");
+    for (const p of panels) for (const r of p.rows) expect(Number.isFinite(r.t) && Number.isFinite(r.value)).toBe(true);
+    expect(panels[0]!.rows.length).toBeLessThanOrEqual(TRACE_BUDGET);
+  });
+
+  test("operating points only with the engine on, never for the battery-electric car", () => {
+    const pts = operatingPoints(result);
+    if (powertrain === "bev") expect(pts).toEqual([]);
+    for (const p of pts) expect(p.speed_rpm).toBeGreaterThan(0);
+  });
+});
+
+describe("helpers", () => {
+  test("thin keeps the first and last sample and the budget", () => {
+    const idx = thin(10_001, 1500);
+    expect(idx.length).toBe(1500);
+    expect(idx[0]).toBe(0);
+    expect(idx[idx.length - 1]).toBe(10_000);
+    expect(thin(5, 10)).toEqual([0, 1, 2, 3, 4]);
+  });
+
+  test("a NaN in a trace never reaches a chart row", () => {
+    const result = resultOf("conventional");
+    const broken: Result = { ...result, traces: { ...result.traces, speed_kmh: result.traces.speed_kmh.map((v, i) => (i === 3 ? Number.NaN : v)) } };
+    const speed = tracePanels(broken)[0]!;
+    expect(speed.rows.every((r) => Number.isFinite(r.value))).toBe(true);
+    expect(speed.rows.length).toBe(tracePanels(result)[0]!.rows.length - 1);
+  });
+
+  test("findings go to the block of their component", () => {
+    expect(blockKindOfFinding({ component: "battery" })).toBe("battery_pack");
+    expect(blockKindOfFinding({ component: "motor" })).toBe("electric_machine");
+    expect(blockKindOfFinding({ component: "vehicle" })).toBe("body");
+    expect(blockKindOfFinding({ component: "something else" })).toBeNull();
+  });
+});
