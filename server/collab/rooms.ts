@@ -126,10 +126,13 @@ async function drain(room: Room): Promise<void> {
  * write pipeline, or are dropped for read-only connections; step 1 and awareness go to the stock
  * listener unchanged.
  */
+/** Mutable, so that a periodic re-check can make an open connection read-only (or writable). */
+export type Access = { writable: boolean };
+
 export function attachConnection(args: {
   conn: WebSocket;
   name: string;
-  writable: boolean;
+  access: Access;
   setup: () => void;
   classify: (data: ArrayBuffer) => { kind: "write"; update: Uint8Array } | { kind: "pass" | "other" };
 }): void {
@@ -147,7 +150,7 @@ export function attachConnection(args: {
     }
     if (message.kind !== "write") {
       for (const listener of stock) listener(data);
-    } else if (args.writable && room) {
+    } else if (args.access.writable && room) {
       enqueue(room, args.conn, message.update);
     }
     // Read-only: dropped, and never persisted.

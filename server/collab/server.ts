@@ -3,11 +3,11 @@
 import { createServer, type IncomingMessage, type ServerResponse } from "node:http";
 import type { Duplex } from "node:stream";
 import type { AddressInfo } from "node:net";
-import { WebSocketServer } from "ws";
+import { WebSocketServer, type WebSocket } from "ws";
 import { docs, setupWSConnection } from "@y/websocket-server/utils";
-import { admit } from "./admission";
+import { admit, decide } from "./admission";
 import { classify, toUint8Array } from "./protocol";
-import { attachConnection, installPersistence, openRoom, openRoomCount, releaseIfIdle, settleReleases } from "./rooms";
+import { attachConnection, type Access, installPersistence, openRoom, openRoomCount, releaseIfIdle, settleReleases } from "./rooms";
 import { handleInject, isInjectRequest } from "./inject";
 
 export type CollabServer = { port: number; close(): Promise<void> };
@@ -28,6 +28,8 @@ export async function startCollabServer(args: {
   host?: string;
   compactThreshold?: number;
   touchInterval_ms?: number;
+  /** How often open connections are re-authorized (session, membership, role, archived). */
+  recheckInterval_ms?: number;
 }): Promise<CollabServer> {
   if (running) throw new Error("a collaboration server is already running in this process");
   const appOrigin = new URL(args.appUrl).origin;
@@ -53,6 +55,27 @@ export async function startCollabServer(args: {
     });
   });
 
+  // Open connections and what they were admitted with, for the periodic re-check.
+  const admitted = new Map<WebSocket, { sessionId: string; documentId: string; access: Access }>();
+  let rechecking = false;
+  const recheck = async () => {
+    if (rechecking) return;
+    rechecking = true;
+    try {
+      for (const [conn, a] of admitted) {
+        const now = await decide({ sessionId: a.sessionId, documentId: a.documentId }).catch(() => null); // database hiccup: keep as is
+        if (!now) continue;
+        // 4401/4403/4404: y-websocket clients treat 44xx as final and stop reconnecting.
+        if (!now.ok) conn.close(4400 + (now.status % 100), now.reason);
+        else a.access.writable = now.writable;
+      }
+    } finally {
+      rechecking = false;
+    }
+  };
+  const recheckTimer = setInterval(() => void recheck(), args.recheckInterval_ms ?? 30_000);
+  recheckTimer.unref();
+
   async function upgrade(req: IncomingMessage, socket: Duplex, head: Buffer): Promise<void> {
     const admission = await admit(req, appOrigin);
     if (!admission.ok) return refuse(socket, admission.status);
@@ -61,8 +84,11 @@ export async function startCollabServer(args: {
     // From here on synchronous: the room cannot be released between load and join.
     if (socket.destroyed) return releaseIfIdle(name);
     wss.handleUpgrade(req, socket, head, (conn) => {
+      const access: Access = { writable: admission.writable };
+      admitted.set(conn, { sessionId: admission.sessionId, documentId: name, access });
+      conn.on("close", () => admitted.delete(conn));
       attachConnection({
-        conn, name, writable: admission.writable,
+        conn, name, access,
         setup: () => setupWSConnection(conn, req, { docName: name }),
         classify: (data) => classify(toUint8Array(data)),
       });
@@ -83,6 +109,7 @@ export async function startCollabServer(args: {
   return {
     port,
     close: async () => {
+      clearInterval(recheckTimer);
       for (const conn of wss.clients) conn.terminate();
       await new Promise<void>((resolve) => http.close(() => resolve()));
       // Closing connections releases their rooms; wait until every write has landed.

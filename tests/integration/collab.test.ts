@@ -13,16 +13,18 @@ import { startCollabServer, type CollabServer } from "@/server/collab/server";
 import * as documentRoute from "@/app/api/workspaces/[workspaceId]/documents/[documentId]/route";
 import { connectClient, tryUpgrade, waitFor, whenSynced, type CollabClient } from "./support/collab";
 import { APP, call } from "./support/http";
-import { teamWorkspace } from "./support/users";
+import { newUser, teamWorkspace } from "./support/users";
+import { addMembership, deleteMembership, setMembershipRole } from "@/db/memberships";
 
 const COMPACT_THRESHOLD = 25;
+const RECHECK_MS = 100;
 let server: CollabServer;
 let url: string;
 let team: Awaited<ReturnType<typeof teamWorkspace>>;
 const open: CollabClient[] = [];
 
 beforeAll(async () => {
-  server = await startCollabServer({ port: 0, appUrl: APP, compactThreshold: COMPACT_THRESHOLD, touchInterval_ms: 0 });
+  server = await startCollabServer({ port: 0, appUrl: APP, compactThreshold: COMPACT_THRESHOLD, touchInterval_ms: 0, recheckInterval_ms: RECHECK_MS });
   url = `ws://127.0.0.1:${server.port}`;
   team = await teamWorkspace();
 });
@@ -263,6 +265,27 @@ describe("collaboration server", () => {
     }
     await waitFor(viewer.doc, (d) => readDoc(d).name === "New name", "the new name at the open client");
     close(viewer);
+  });
+
+  it("re-checks open connections: a demoted editor turns read-only, a removed member is disconnected", async () => {
+    const id = await newDocument();
+    const member = await newUser("demoted");
+    await addMembership({ workspaceId: team.workspaceId, userId: member.id, role: "editor" });
+    const [m, owner, viewer] = await Promise.all([client(id, member.cookie), client(id, team.owner.cookie), client(id, team.viewer.cookie)]);
+    m.doc.getText("t").insert(0, "before;");
+    await waitFor(owner.doc, (d) => d.getText("t").toString() === "before;", "edit before the demotion");
+    await setMembershipRole({ workspaceId: team.workspaceId, userId: member.id, role: "reviewer" });
+    await new Promise((r) => setTimeout(r, RECHECK_MS * 6)); // several re-checks have run
+    m.doc.getText("t").insert(0, "after;");
+    await processed(m, owner);
+    await barrier(owner, viewer);
+    expect(owner.doc.getText("t").toString()).toBe("before;");
+    expect((await storedDoc(id)).getText("t").toString()).toBe("before;");
+    // Removed from the workspace: the server closes the connection with 4404 (final for y-websocket).
+    const closed = new Promise<number>((resolve) => m.provider.on("connection-close", (event) => resolve(event?.code ?? 0)));
+    await deleteMembership({ workspaceId: team.workspaceId, userId: member.id });
+    expect(await closed).toBe(4404);
+    close(m, owner, viewer);
   });
 
   it("touches documents.updated_at when edits arrive", async () => {
