@@ -121,10 +121,9 @@ export function compareStrategies(s: Scenario, o: CompareOptions = {}): CompareO
   progress(0.2, "DP backward pass");
   const dp = new DpManager(plant, dpSettings, {
     tables, signal: o.signal, gridCheck: o.gridCheck,
-    onProgress: (x) => progress(0.2 + 0.55 * x, "DP backward pass"),
+    onProgress: (x) => progress(0.2 + 0.78 * x, x <= 2 / 3 || o.gridCheck === false ? "DP backward pass" : "DP grid check"),
   });
   const dpRun = simulate(plant, dp, b.soc_initial);
-  progress(0.78, "DP grid check");
   const dpFindings = dp.findings(dpRun);
   progress(1, "done");
   const corr = socCorrection(s, cs.bracketed ? cs.factor : null);

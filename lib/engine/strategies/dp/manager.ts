@@ -16,7 +16,9 @@ export class DpManager implements Strategy {
   readonly plan: DpPlan;
 
   constructor(private readonly plant: HybridPlant, readonly settings: DpSettings, private readonly opts: DpRunOptions & { gridCheck?: boolean } = {}) {
-    this.plan = planDp(plant, settings, opts);
+    // Progress: the requested pass is the first 2/3 of the work, the coarser check (half the points) the rest.
+    const share = opts.gridCheck === false ? 1 : 2 / 3;
+    this.plan = planDp(plant, settings, { ...opts, onProgress: opts.onProgress && ((x) => opts.onProgress!(share * x)) });
   }
 
   reset(socInitial: number): void {
@@ -31,10 +33,15 @@ export class DpManager implements Strategy {
   findings(run: Run): Finding[] {
     const d = this.plant.demand;
     const out = dpWindowFindings(this.plan, d, this.plant.battery.socInitial, run.socFinal);
-    if (this.opts.gridCheck === false || !this.plan.reachable) return out;
     const coarse = coarserSocPoints(this.settings.socPoints);
-    if (coarse >= this.settings.socPoints) return out;
-    const plan = planDp(this.plant, { ...this.settings, socPoints: coarse }, { tables: this.plan.tables, signal: this.opts.signal });
+    if (this.opts.gridCheck === false || !this.plan.reachable || coarse >= this.settings.socPoints) {
+      this.opts.onProgress?.(1);
+      return out;
+    }
+    const report = this.opts.onProgress;
+    const plan = planDp(this.plant, { ...this.settings, socPoints: coarse }, {
+      tables: this.plan.tables, signal: this.opts.signal, onProgress: report && ((x) => report(2 / 3 + x / 3)),
+    });
     const coarseRun = simulate(this.plant, plan.strategy, this.plant.battery.socInitial);
     const g = dpGridFinding(this.settings.socPoints, run.ledger.fuel, coarse, coarseRun.ledger.fuel);
     if (g) out.push(g);
