@@ -18,6 +18,7 @@ import { useMailSink } from "./support/mail";
 import { teamWorkspace, type TestUser } from "./support/users";
 import { VERSION_ROUTES } from "./versions-matrix-cases";
 import { DOCUMENT_ROUTES } from "./documents-matrix-cases";
+import { LIBRARY_ROUTES } from "./library-matrix-cases";
 
 useMailSink();
 
@@ -75,6 +76,7 @@ const ROUTES: RouteCase[] = [
   },
   ...VERSION_ROUTES,
   ...DOCUMENT_ROUTES,
+  ...LIBRARY_ROUTES,
 ];
 
 async function setup(who: Who): Promise<Setup> {
