@@ -6,6 +6,7 @@ import { isUuid } from "@/lib/authz";
 import { loadWorkspace } from "@/components/workspace/load-workspace";
 import { NotebookClient } from "@/components/notebook/notebook-client";
 import { DocumentReviewBar } from "@/components/reviews/document-review-bar";
+import { ExportMenu } from "@/components/library/export-menu";
 
 export const metadata: Metadata = { title: "Scenario" };
 
@@ -20,6 +21,7 @@ export default async function DocumentPage({ params }: { params: Promise<{ works
   return (
     <>
     <DocumentReviewBar workspaceId={workspaceId} documentId={documentId} />
+    <ExportMenu workspaceId={workspaceId} documentId={documentId} />
     <NotebookClient
       workspaceId={workspaceId}
       documentId={documentId}
