@@ -1,7 +1,11 @@
-import { prepareJob, type JobOutcome, type JobRequest } from "@/lib/engine/jobs/runner";
+import type { JobOutcome, JobRequest } from "@/lib/engine/jobs/runner";
+import { canonicalJson, sha256Hex } from "@/lib/engine/jobs/hash";
 import type { StrategyWorkerMessage, StrategyWorkerRequest } from "./protocol";
 
-/** Results of this browser tab, keyed by the scenario hash (lib/engine/jobs/hash.ts). */
+/**
+ * Results of this browser tab, keyed by the hash of the request as given (lib/engine/jobs/hash.ts).
+ * The scenario is validated in the worker, so the engine (zod and all) stays out of the page's bundle.
+ */
 const cache = new Map<string, Extract<JobOutcome, { ok: true }>>();
 const CACHE_SIZE = 16;
 
@@ -16,9 +20,8 @@ export interface RunHooks {
  * AbortError when cancelled (the worker is terminated at once).
  */
 export function runStrategyJob(request: JobRequest, hooks: RunHooks = {}): Promise<JobOutcome> {
-  const prepared = prepareJob(request);
-  if (!prepared.ok) return Promise.resolve(prepared);
-  const hit = cache.get(prepared.key);
+  const key = keyOf(request);
+  const hit = key ? cache.get(key) : undefined;
   if (hit) {
     hooks.onProgress?.(1, "done (cached)");
     return Promise.resolve(hit);
@@ -40,8 +43,8 @@ export function runStrategyJob(request: JobRequest, hooks: RunHooks = {}): Promi
       if (m.type === "progress") return hooks.onProgress?.(m.share, m.phase);
       finish();
       if (m.type === "error") return reject(new Error(m.message));
-      if (m.outcome.ok) {
-        cache.set(prepared.key, m.outcome);
+      if (m.outcome.ok && key) {
+        cache.set(key, m.outcome);
         while (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value as string);
       }
       resolve(m.outcome);
@@ -50,6 +53,14 @@ export function runStrategyJob(request: JobRequest, hooks: RunHooks = {}): Promi
       finish();
       reject(new Error(`the strategy worker failed: ${event.message}`));
     };
-    worker.postMessage({ type: "run", request: { scenario: prepared.request.scenario, compare: prepared.request.compare } } satisfies StrategyWorkerRequest);
+    worker.postMessage({ type: "run", request: { scenario: request.scenario, compare: request.compare === true } } satisfies StrategyWorkerRequest);
   });
+}
+
+function keyOf(request: JobRequest): string | null {
+  try {
+    return sha256Hex(canonicalJson({ job: request.compare ? "compare" : "evaluate", scenario: request.scenario }));
+  } catch {
+    return null; // not plain JSON (e.g. a non-finite number): run without the cache
+  }
 }
