@@ -61,3 +61,28 @@ describe("DP through evaluateScenario", () => {
     }
   });
 });
+
+describe("a cycle the hardware cannot follow", () => {
+  // DESIGN §4: infeasible steps are reported, never hidden; DP and ECMS must still return a plan
+  // that respects the battery limits and the window, not collapse because of those steps.
+  for (const kind of ["dp", "ecms"] as const) {
+    it(`${kind}: a 20 kW motor on NEDC reports motor-torque findings, keeps the window, never NaN`, () => {
+      const raw = example("series");
+      raw.motor = { ...raw.motor, peak_power_kw: 20 };
+      raw.strategy = kind === "dp"
+        ? { kind, soc_points: 101, control_points: 21, soc_final_min: 0.5, soc_final_max: 0.502 }
+        : { kind, equivalence_factor: 3, soc_feedback_gain: 20, soc_target: 0.5, control_points: 21 };
+      const out = evaluateScenario(parsed(raw));
+      if (!out.ok) throw new Error(out.errors[0].message);
+      const r = out.result;
+      expect(walkNumbers(r).filter(([, v]) => !Number.isFinite(v))).toEqual([]);
+      expect(r.kpi.feasible).toBe(false);
+      const codes = new Set(r.findings.filter((f) => f.severity === "infeasible").map((f) => f.code));
+      expect([...codes]).toEqual(["motor_torque_above_limit"]); // the only limit broken is the hardware's
+      if (kind === "dp") {
+        expect(r.kpi.soc_final!).toBeGreaterThanOrEqual(0.5 - 1e-12);
+        expect(r.kpi.soc_final!).toBeLessThanOrEqual(0.502 + 1e-12);
+      }
+    });
+  }
+});
