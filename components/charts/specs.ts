@@ -81,7 +81,7 @@ export interface TracePanel {
  * A vconcat (not a facet) so that the layout never depends on the data pushed later; the panel
  * list depends only on the powertrain, so the spec changes only when the powertrain does.
  */
-export function tracesSpec(panels: readonly TracePanel[]): VisualizationSpec {
+export function tracesSpec(panels: readonly TracePanel[], legendSeries: readonly string[]): VisualizationSpec {
   return {
     $schema: "https://vega.github.io/schema/vega-lite/v6.json",
     config: CHART_CONFIG,
@@ -96,8 +96,8 @@ export function tracesSpec(panels: readonly TracePanel[]): VisualizationSpec {
       mark: { type: "line", strokeWidth: 1.2, interpolate: p.id === "trace_gear" ? "step-after" : "linear" },
       encoding: {
         x: { field: "t", type: "quantitative", title: i === panels.length - 1 ? "time (s)" : null, axis: { labels: i === panels.length - 1 } },
-        y: { field: "value", type: "quantitative", title: null, axis: { tickCount: 4 } },
-        color: seriesColor,
+        y: { field: "value", type: "quantitative", title: null, axis: { tickCount: 4 }, scale: { zero: p.id !== "trace_soc" } },
+        color: { ...seriesColor, legend: { ...seriesColor.legend, values: legendSeries } },
       },
     })),
   } as VisualizationSpec;

@@ -33,9 +33,14 @@ function TracesBody({ result }: { result: Result }) {
   const layout = panels.map((p) => `${p.id}:${p.title}`).join("|");
   // The spec follows the list of panels only (i.e. the powertrain), never the values.
   // eslint-disable-next-line react-hooks/exhaustive-deps
-  const spec = useMemo(() => tracesSpec(panels.map(({ id, title }) => ({ id, title }))), [layout]);
+  const spec = useMemo(() => tracesSpec(panels.map(({ id, title }) => ({ id, title })), powerSeries(result.powertrain)), [layout]);
   const datasets = useMemo(() => Object.fromEntries(panels.map((p) => [p.id, p.rows])), [panels]);
   return <Chart key={layout} spec={spec} datasets={datasets} label="Traces over the cycle: speed, power split, SOC, gear" />;
+}
+
+/** The series of the power-split panel (the only panel with more than one line). */
+function powerSeries(pt: Result["powertrain"]): string[] {
+  return [...(pt !== "bev" ? ["engine"] : []), ...(pt !== "conventional" ? ["motor"] : []), ...(pt === "series" ? ["generator"] : []), "friction brakes"];
 }
 
 export function OperatingPoints() {

@@ -102,7 +102,7 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
             : `You are a ${role} in this workspace: you can read this document and follow the figures live, but not change it.`}
         </p>
       )}
-      <DocumentMessages messages={messagesByBlock.get("") ?? NO_MESSAGES} findings={findings.get("") ?? NO_FINDINGS} />
+      {blocks.length > 0 ? <DocumentMessages messages={messagesByBlock.get("") ?? NO_MESSAGES} findings={findings.get("") ?? NO_FINDINGS} /> : null}
       {collab.synced && blocks.length === 0 ? <EmptyDocument canEdit={canEdit} powertrain={powertrain} name={name} /> : null}
       <div className="space-y-4">
         {blocks.map((b, i) => (

@@ -2,6 +2,8 @@
 // mass reaches the other editor through the collaboration server, and both see the headline
 // figures recalculated by their own evaluation worker. A reviewer follows along read-only.
 // Demo accounts come from scripts/seed/foundation.ts (seeded by scripts/test.sh).
+import { mkdirSync } from "node:fs";
+import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { appUrl, openPerson, screenshot, type Person } from "./support/browser";
@@ -43,6 +45,20 @@ const massText = (page: Page) =>
     return (copy.textContent ?? "").replace(/\u2060/g, "");
   });
 const fuelFigure = (page: Page) => page.locator('[data-block-kind="headline_figures"] [data-kpi="fuel"]');
+
+/** Full page from the top (the notebook header is sticky), and one block close up. */
+async function pageShot(page: Page, name: string): Promise<void> {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await screenshot(page, name);
+}
+
+async function blockShot(page: Page, kind: string, name: string): Promise<void> {
+  const dir = join(process.env.ARTIFACTS_DIR ?? "artifacts", "screenshots");
+  mkdirSync(dir, { recursive: true });
+  const block = page.locator(`[data-block-kind="${kind}"]`).first();
+  await block.scrollIntoViewIfNeeded();
+  await block.screenshot({ path: join(dir, `${name}.png`) });
+}
 
 async function openDocument(page: Page, path: string): Promise<void> {
   await gotoApp(page, path);
@@ -90,8 +106,12 @@ describe("notebook: two people in one document", () => {
     await expect.poll(() => fuelFigure(a.page).innerText(), { timeout: 10_000 }).toBe(after);
     // B's compiled value under the field follows the text.
     await expect.poll(() => b.page.locator('[data-block-kind="body"] [data-field="mass"] [data-compiled-value]').innerText()).toBe("= 2400 kg");
-    await screenshot(a.page, "nb1-editor-a-after-edit");
-    await screenshot(b.page, "nb2-editor-b-sees-edit");
+    await pageShot(a.page, "nb1-editor-a-after-edit");
+    await pageShot(b.page, "nb2-editor-b-sees-edit");
+    await blockShot(b.page, "body", "nb2a-editor-b-body-block-with-a-cursor");
+    await blockShot(b.page, "headline_figures", "nb2b-editor-b-headline-figures");
+    await blockShot(b.page, "loss_ledger", "nb2c-editor-b-loss-ledger");
+    await blockShot(b.page, "traces", "nb2d-editor-b-traces");
 
     // The reviewer sees the edit too, but cannot change a field or add blocks.
     await expect.poll(() => massText(reviewer.page), { timeout: 10_000 }).toBe("2400 kg");
@@ -104,7 +124,7 @@ describe("notebook: two people in one document", () => {
     expect(await massText(a.page)).toBe("2400 kg");
     expect(await reviewer.page.getByRole("button", { name: "+ Add block" }).count()).toBe(0);
     await reviewer.page.locator("[data-read-only]").waitFor();
-    await screenshot(reviewer.page, "nb3-reviewer-read-only");
+    await pageShot(reviewer.page, "nb3-reviewer-read-only");
 
     // Undo is per person: A's Ctrl+Z restores the formula for everyone.
     await massField(a.page).click();

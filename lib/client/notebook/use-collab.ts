@@ -50,13 +50,15 @@ export function useCollab(opts: { collabUrl: string | null; documentId: string; 
       const online = typeof navigator === "undefined" || navigator.onLine;
       const connected = provider.wsconnected && provider.synced;
       if (connected) everConnected = true;
-      const connection: ConnectionState = connected ? "connected" : !online ? "offline" : everConnected ? "reconnecting" : "connecting";
+      // The browser's own offline flag wins: a socket can look open for a while after the network went.
+      const connection: ConnectionState = !online ? "offline" : connected ? "connected" : everConnected ? "reconnecting" : "connecting";
       setStatus({ synced: everConnected, connection, unsynced });
     };
     const onDocUpdate = (_u: Uint8Array, origin: unknown) => {
       if (origin === provider) return;
       // Sent at once while connected and synced; otherwise held until the next sync exchange.
-      if (!(provider.wsconnected && provider.synced)) { unsynced = true; update(); }
+      const online = typeof navigator === "undefined" || navigator.onLine;
+      if (!(online && provider.wsconnected && provider.synced)) { unsynced = true; update(); }
     };
     const onSync = (isSynced: boolean) => { if (isSynced) unsynced = false; update(); };
     provider.on("status", update);
