@@ -189,6 +189,8 @@ async function main(): Promise<void> {
     clearInterval(sampler);
     const loadAfter = loadavg()[0]!;
     const total = clients.reduce((n, c) => n + c.sent, 0);
+    type Relay = { n: number; p50_ms: number | null; p95_ms: number | null; max_ms: number | null };
+    const relay = ((await (await fetch(`http://127.0.0.1:${PORT}/health`)).json()) as { relay: Relay }).relay;
     const missingAtClients = await missingAfterSettle(clients, total);
     const busy = memory_mib(server.pid!);
 
@@ -217,6 +219,7 @@ async function main(): Promise<void> {
           ["propagation p95 (ms)", p95.toFixed(1), `< ${TARGET_P95_MS}`],
           ["propagation p99 (ms)", percentile(latencies, 99).toFixed(1), ""],
           ["propagation max (ms)", (latencies[latencies.length - 1] ?? NaN).toFixed(1), ""],
+          ["server arrival→stored+relayed p50/p95 (ms)", `${relay.p50_ms}/${relay.p95_ms}`, "server's share"],
           ["lost at clients (client×edit)", missingAtClients, "0"],
           ["lost in PostgreSQL (edits)", missingInDb, "0"],
           ["update rows left (compaction at 500)", rows, "< 500 + a batch"],

@@ -17,7 +17,7 @@ export type RoomOptions = {
   touchInterval_ms: number;
 };
 
-type Pending = { conn: WebSocket; update: Uint8Array };
+type Pending = { conn: WebSocket; update: Uint8Array; arrived_ms: number };
 
 type Room = {
   name: string;
@@ -158,7 +158,7 @@ export function attachConnection(args: {
 }
 
 function enqueue(room: Room, conn: WebSocket, update: Uint8Array): void {
-  room.queue.push({ conn, update });
+  room.queue.push({ conn, update, arrived_ms: performance.now() });
   room.running ??= run(room);
 }
 
@@ -201,6 +201,7 @@ async function processBatch(room: Room, batch: Pending[]): Promise<void> {
     } catch (error) {
       log(`could not apply an update to ${room.name}`, error);
     }
+    recordRelay(performance.now() - item.arrived_ms);
   }
   if (rows.length === 0) return;
   room.updateCount += rows.length;
@@ -227,6 +228,22 @@ function maybeCompact(room: Room): void {
     .finally(() => {
       room.compaction = null;
     });
+}
+
+// Arrival → stored and relayed, per update: the server's own share of the propagation latency.
+const relaySamples_ms = new Float64Array(10_000);
+let relayCount = 0;
+function recordRelay(ms: number): void {
+  relaySamples_ms[relayCount++ % relaySamples_ms.length] = ms;
+}
+
+/** Percentiles of the last 10 000 arrival → relay times (ms), for GET /health and the benchmark. */
+export function relayStats(): { n: number; p50_ms: number | null; p95_ms: number | null; max_ms: number | null } {
+  const n = Math.min(relayCount, relaySamples_ms.length);
+  if (n === 0) return { n: 0, p50_ms: null, p95_ms: null, max_ms: null };
+  const sorted = Array.from(relaySamples_ms.subarray(0, n)).sort((a, b) => a - b);
+  const at = (p: number) => Math.round(sorted[Math.min(n - 1, Math.floor(p * n))]! * 10) / 10;
+  return { n: relayCount, p50_ms: at(0.5), p95_ms: at(0.95), max_ms: at(1) };
 }
 
 /** Waits until every room released so far has finished writing (shutdown, tests). */

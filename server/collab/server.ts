@@ -7,7 +7,7 @@ import { WebSocketServer, type WebSocket } from "ws";
 import { docs, setupWSConnection } from "@y/websocket-server/utils";
 import { admit, decide } from "./admission";
 import { classify, toUint8Array } from "./protocol";
-import { attachConnection, type Access, installPersistence, openRoom, openRoomCount, releaseIfIdle, settleReleases } from "./rooms";
+import { attachConnection, type Access, installPersistence, openRoom, openRoomCount, relayStats, releaseIfIdle, settleReleases } from "./rooms";
 import { handleInject, isInjectRequest } from "./inject";
 
 export type CollabServer = { port: number; close(): Promise<void> };
@@ -39,7 +39,7 @@ export async function startCollabServer(args: {
   const http = createServer((req: IncomingMessage, res: ServerResponse) => {
     if (req.method === "GET" && req.url === "/health") {
       res.writeHead(200, { "content-type": "application/json", "cache-control": "no-store" });
-      res.end(JSON.stringify({ ok: true, documents: docs.size, connections: wss.clients.size }));
+      res.end(JSON.stringify({ ok: true, documents: docs.size, connections: wss.clients.size, relay: relayStats() }));
       return;
     }
     // Restores from the app (versions): an update already in PostgreSQL, relayed to connected clients.
