@@ -166,6 +166,7 @@ async function missingAfterSettle(clients: Client[], total: number): Promise<num
 }
 
 async function main(): Promise<void> {
+  process.setMaxListeners(CLIENTS + 10); // each provider adds a process "exit" listener
   const db = await database();
   process.env.DATABASE_URL = db.url;
   let server: ChildProcess | undefined;
