@@ -8,6 +8,7 @@ import { ApiError } from "@/lib/client/api";
 import { LIBRARY_KIND_LABELS } from "@/lib/library/kinds";
 import { deleteLibraryItem, libraryKey, listLibrary, type LibraryRow } from "./api";
 import { summaryPairs } from "./summary-figures";
+import { BlockValues } from "./block-values";
 
 function Usage({ row, workspaceId }: { row: LibraryRow; workspaceId: string }) {
   if (row.usedBy.length === 0) return <span className="text-muted">not used</span>;
@@ -46,6 +47,7 @@ export function LibraryTable({ workspaceId, canDelete, initial }: { workspaceId:
               <td className="py-2 pr-3 font-medium">
                 {row.name}
                 <div className="font-mono text-xs text-muted" title="library id for drive-cycle blocks">{row.id}</div>
+                <BlockValues workspaceId={workspaceId} id={row.id} kind={row.kind} />
               </td>
               <td className="pr-3">{LIBRARY_KIND_LABELS[row.kind]}</td>
               <td className="pr-3">
