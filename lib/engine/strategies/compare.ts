@@ -11,7 +11,7 @@ import { ParallelRuleStrategy } from "./parallel-rule";
 import { buildCandidateTables, type HybridPlant } from "./dp/tables";
 import { chargeSustainingFactor } from "./equivalence";
 import { DpManager } from "./dp/manager";
-import { isHybrid } from "./optimising";
+import { dpSizeRefusal, isHybrid } from "./optimising";
 import { operatingRegions, type OperatingRegions } from "./regions";
 import { correctedFuel_j, socCorrection, type SocCorrection } from "./soc-correction";
 
@@ -107,6 +107,8 @@ export function compareStrategies(s: Scenario, o: CompareOptions = {}): CompareO
   const dpSettings = st?.kind === "dp"
     ? { socPoints: st.soc_points, controlPoints: cp, socFinalMin: st.soc_final_min, socFinalMax: st.soc_final_max }
     : { socPoints: DEFAULT_SOC_POINTS, controlPoints: cp, socFinalMin: b.soc_initial, socFinalMax: Math.min(b.soc_max, b.soc_initial + DEFAULT_WINDOW) };
+  const tooBig = dpSizeRefusal(demand.n, dpSettings.socPoints);
+  if (tooBig) return { ok: false, reason: tooBig };
   progress(0, "baseline");
   const base = baseline(s, plant);
   const baseRun = simulate(plant, base, b.soc_initial);

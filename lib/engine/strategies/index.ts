@@ -38,6 +38,7 @@ export function makeStrategy(s: Scenario, plant: Plant, run: DpRunOptions = {}):
     };
   }
   const optimising = makeOptimisingStrategy(spec, plant, run);
+  if (typeof optimising === "string") return { ok: false, kind: spec.kind, reason: optimising };
   if (optimising) return { ok: true, strategy: optimising };
   return { ok: false, kind: spec.kind, reason: `strategy '${spec.kind}' is not available yet for powertrain '${plant.powertrain}'` };
 }

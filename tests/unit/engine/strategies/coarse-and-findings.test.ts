@@ -86,3 +86,15 @@ describe("a cycle the hardware cannot follow", () => {
     });
   }
 });
+
+describe("DP size", () => {
+  it("a DP too large for memory is refused with a message naming soc_points, not run", () => {
+    // 150,001 samples × 1001 SOC points ≈ 1.1 GB of cost-to-go: above the 256 MB limit (ours).
+    const raw = example("series");
+    raw.cycle = { dt_s: 1, speed_kmh: Array.from({ length: 150_001 }, (_, i) => (i % 600 < 10 ? 0 : 30)) };
+    raw.strategy = { kind: "dp", soc_points: 1001, control_points: 11, soc_final_min: 0.5, soc_final_max: 0.51 };
+    const out = evaluateScenario(parsed(raw));
+    expect(out.ok).toBe(false);
+    if (!out.ok) expect(out.errors[0].message).toMatch(/needs \d+ MB .*strategy\.soc_points/);
+  });
+});
