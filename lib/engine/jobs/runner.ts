@@ -43,7 +43,11 @@ export function runPreparedJob(p: Extract<Prepared, { ok: true }>, hooks: JobHoo
   const { scenario, compare } = p.request;
   if (compare) {
     const out = compareStrategies(scenario, { signal: hooks.signal, onProgress: hooks.onProgress });
-    if (!out.ok) return { ok: false, errors: [{ path: "powertrain", value: scenario.powertrain, rule: out.reason, message: `powertrain: ${out.reason}` }] };
+    if (!out.ok) {
+      const path = out.reason.startsWith("DP over") ? "strategy.soc_points" : "powertrain";
+      const value = path === "powertrain" ? scenario.powertrain : scenario.strategy?.kind === "dp" ? scenario.strategy.soc_points : 201;
+      return { ok: false, errors: [{ path, value, rule: out.reason, message: `${path}: ${out.reason}` }] };
+    }
     return { ok: true, key: p.key, value: { kind: "compare", comparison: out.comparison } };
   }
   const out = evaluateScenario(scenario, { signal: hooks.signal, onProgress: (x) => hooks.onProgress?.(x, "DP backward pass") });
