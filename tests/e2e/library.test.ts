@@ -52,6 +52,38 @@ describe("team library and API tokens in the browser", () => {
     expect(await page.locator("table").innerText()).toContain("not used");
     await screenshot(page, "library-03-saved");
 
+    // use it in a document: a drive-cycle block whose source is the library
+    const workspaceId = workspacePath.split("/")[2]!;
+    const items = (await (await page.request.get(appUrl(`/api/workspaces/${workspaceId}/library`))).json()) as { items: { id: string }[] };
+    const itemId = items.items[0]!.id;
+    const created = await page.request.post(appUrl(`/api/workspaces/${workspaceId}/documents`), {
+      data: { name: "Depot van", powertrain: "bev" }, headers: { origin: new URL(appUrl("/")).origin },
+    });
+    expect(created.status()).toBe(201);
+    const documentId = ((await created.json()) as { document: { id: string } }).document.id;
+    await gotoApp(page, `/w/${workspaceId}/documents/${documentId}`);
+    await page.locator('[data-connection="connected"]').waitFor();
+    const cycleBlock = page.locator('[data-block-kind="drive_cycle"]');
+    await cycleBlock.locator('[data-field="source"] select').selectOption("library");
+    await cycleBlock.locator('[data-field="library_id"] .cm-content').click();
+    await page.keyboard.type(itemId);
+    // the uploaded 30 s, 200 m cycle is evaluated live in the page
+    await page.locator('[data-block-kind="headline_figures"]').getByText("0.20 km in 30 s").waitFor();
+    await screenshot(page, "library-04-document-uses-cycle");
+    await gotoApp(page, `/w/${workspaceId}/library`);
+    await page.getByText("used by 1 document").waitFor();
+
+    // export the results: traces CSV (3 intervals of 10 s), summary page, chart PNG
+    const exportBase = appUrl(`/api/workspaces/${workspaceId}/documents/${documentId}/export`);
+    const csv = await page.request.get(`${exportBase}/traces`);
+    expect(csv.status()).toBe(200);
+    const lines = (await csv.text()).trim().split("\n").filter((l) => !l.startsWith("#"));
+    expect(lines.slice(1).map((l) => l.split(",")[0])).toEqual(["0", "10", "20"]);
+    const summary = await page.request.get(`${exportBase}/summary`);
+    expect(await summary.text()).toContain("0.200 km");
+    const png = await page.request.get(`${exportBase}/charts/speed.png`);
+    expect(png.headers()["content-type"]).toBe("image/png");
+
     // an API token, shown once, that evaluates a scenario
     await gotoApp(page, "/account/tokens");
     await page.getByLabel("Name").fill("nightly");
