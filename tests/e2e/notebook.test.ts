@@ -132,6 +132,18 @@ describe("notebook: two people in one document", () => {
     await expect.poll(() => massText(b.page), { timeout: 10_000 }).toBe("curb_mass + payload");
     await expect.poll(() => fuelFigure(b.page).innerText(), { timeout: 10_000 }).toBe(before);
 
+    // Offline: A's edit stays in A's tab (badge says so), and arrives when A is back online.
+    await a.context.setOffline(true);
+    await a.page.locator('[data-connection="offline"]').waitFor();
+    await massField(a.page).click();
+    await a.page.keyboard.press("Control+A");
+    await a.page.keyboard.insertText("2000 kg");
+    await a.page.locator("[data-unsynced]").waitFor();
+    await pageShot(a.page, "nb4-editor-a-offline-unsynced");
+    await a.context.setOffline(false);
+    await a.page.locator('[data-connection="connected"]:not([data-unsynced])').waitFor({ timeout: 20_000 });
+    await expect.poll(() => massText(b.page), { timeout: 20_000 }).toBe("2000 kg");
+
     for (const w of watches) expect(w.take()).toEqual([]);
   });
 });

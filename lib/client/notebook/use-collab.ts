@@ -64,11 +64,17 @@ export function useCollab(opts: { collabUrl: string | null; documentId: string; 
     provider.on("status", update);
     provider.on("sync", onSync);
     doc.on("update", onDocUpdate);
-    window.addEventListener("online", update);
+    // Back online with edits made meanwhile: reconnect, so the sync exchange (state vectors)
+    // delivers whatever the old socket may have dropped, and the badge clears on its answer.
+    const onOnline = () => {
+      if (unsynced) { provider.disconnect(); provider.connect(); }
+      update();
+    };
+    window.addEventListener("online", onOnline);
     window.addEventListener("offline", update);
     setSession({ doc, awareness: provider.awareness });
     return () => {
-      window.removeEventListener("online", update);
+      window.removeEventListener("online", onOnline);
       window.removeEventListener("offline", update);
       doc.off("update", onDocUpdate);
       provider.destroy();
