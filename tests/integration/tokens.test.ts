@@ -7,6 +7,7 @@ import * as tokenRoute from "@/app/api/tokens/[tokenId]/route";
 import * as evaluateRoute from "@/app/api/evaluate/route";
 import * as workspaceRoute from "@/app/api/workspaces/[workspaceId]/route";
 import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
+import * as libraryRoute from "@/app/api/workspaces/[workspaceId]/library/route";
 import * as invitationsRoute from "@/app/api/workspaces/[workspaceId]/invitations/route";
 import * as memberRoute from "@/app/api/workspaces/[workspaceId]/members/[userId]/route";
 import { eq } from "drizzle-orm";
@@ -73,6 +74,10 @@ describe("personal API tokens", () => {
     expect((await bodyOf(ok)).role).toBe("viewer"); // capped to the token's role, though the user owns A
     const other = await readWorkspace(body.token, b);
     expect(other.status).toBe(404);
+    const library = await call(libraryRoute.GET, "GET", `/api/workspaces/${a}/library`, { headers: bearer(body.token), params: { workspaceId: a } });
+    expect(library.status).toBe(200);
+    const upload = await call(libraryRoute.POST, "POST", `/api/workspaces/${a}/library`, { body: { kind: "cycle", text: "0\n1\n" }, headers: bearer(body.token), params: { workspaceId: a }, origin: null });
+    expect(upload.status).toBe(403);
     const members = await call(membersRoute.GET, "GET", `/api/workspaces/${b}/members`, { headers: bearer(body.token), params: { workspaceId: b } });
     expect(members.status).toBe(404);
   });
