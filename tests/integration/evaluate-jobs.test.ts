@@ -4,6 +4,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import * as jobsRoute from "@/app/api/evaluate/jobs/route";
 import * as jobRoute from "@/app/api/evaluate/jobs/[id]/route";
+import * as evaluateRoute from "@/app/api/evaluate/route";
 import { bodyOf, call } from "./support/http";
 import { newUser } from "./support/users";
 
@@ -69,4 +70,22 @@ describe("POST /api/evaluate/jobs", () => {
     expect(body.state).toBe("done");
     expect(body.result.comparison.strategies.map((s: { kind: string }) => s.kind)).toEqual(["thermostat", "ecms", "dp"]);
   }, 90_000);
+});
+
+describe("POST /api/evaluate with the strategy block (ECMS, DP)", () => {
+  it("evaluates ECMS and DP examples synchronously, with the strategy named in the Result", async () => {
+    const u = await newUser("evalstrat");
+    for (const name of ["parallel-ecms", "series-ecms", "parallel-dp", "series-dp"]) {
+      const scenario = JSON.parse(readFileSync(`examples/${name}.json`, "utf8"));
+      const res = await call(evaluateRoute.POST, "POST", "/api/evaluate", { cookie: u.cookie, body: scenario });
+      expect(res.status, name).toBe(200);
+      const r = await bodyOf(res);
+      expect(r.strategy).toBe(scenario.strategy.kind);
+      expect(r.kpi.feasible).toBe(true);
+      if (scenario.strategy.kind === "dp") {
+        expect(r.kpi.soc_final).toBeGreaterThanOrEqual(scenario.strategy.soc_final_min - 1e-12);
+        expect(r.kpi.soc_final).toBeLessThanOrEqual(scenario.strategy.soc_final_max + 1e-12);
+      }
+    }
+  }, 60_000);
 });
