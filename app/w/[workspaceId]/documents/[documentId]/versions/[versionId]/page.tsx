@@ -12,6 +12,7 @@ import { RestoreButton } from "@/components/versions/restore-button";
 import { VersionBlocks, VersionLedger } from "@/components/versions/version-view";
 import { viewBlocks, viewLedger } from "@/components/versions/view-model";
 import { Panel } from "@/components/ui/panel";
+import { ExportMenu } from "@/components/library/export-menu";
 import { PageTitle } from "@/components/ui/page-title";
 
 export const metadata: Metadata = { title: "Version" };
@@ -39,6 +40,7 @@ export default async function VersionPage({ params }: { params: Promise<Params> 
       <div className="mb-gutter flex flex-wrap items-center gap-4 text-sm">
         {previous ? <Link className="underline" href={`${base}/diff?from=${previous.id}&to=${version.id}`}>Compare with v{previous.number}</Link> : null}
         <Link className="underline" href={`${base}/diff?from=${version.id}&to=live`}>Compare with the live document</Link>
+        {version.summary ? <ExportMenu workspaceId={workspaceId} documentId={documentId} versionId={version.id} /> : null}
         {can(role, "document.edit") && document.archivedAt === null ? <RestoreButton workspaceId={workspaceId} documentId={documentId} versionId={version.id} label={`v${version.number}`} /> : null}
       </div>
       <div className="grid gap-gutter lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
