@@ -2,7 +2,7 @@
 // summary, computed here from the document itself (never taken from a client).
 import * as Y from "yjs";
 import { evaluateScenario, parseScenario } from "@/lib/engine";
-import { compile, readDoc, type CompileMessage, type DocSnapshot } from "@/lib/notebook";
+import { compile, readDoc, type CompileMessage, type DocSnapshot, type LibraryResolver } from "@/lib/notebook";
 import { summarizeResult } from "./summary";
 import type { ResultSummary } from "./types";
 
@@ -32,8 +32,9 @@ export function snapshotOfState(state: Uint8Array): DocSnapshot {
 
 const errorTexts = (messages: CompileMessage[]) => messages.filter((m) => m.severity === "error").map((m) => m.text);
 
-export function versionContent(snapshot: DocSnapshot): VersionContent {
-  const compiled = compile(snapshot);
+/** `resolveLibrary`: drive cycles from the team library (lib/library/resolver.ts), loaded by the caller. */
+export function versionContent(snapshot: DocSnapshot, resolveLibrary?: LibraryResolver): VersionContent {
+  const compiled = compile({ ...snapshot, resolveLibrary });
   if (!compiled.scenario) return { snapshot, scenario: null, summary: null, problems: errorTexts(compiled.messages) };
   const parsed = parseScenario(compiled.scenario);
   if (!parsed.ok) return { snapshot, scenario: compiled.scenario, summary: null, problems: parsed.errors.map((e) => e.message) };

@@ -15,6 +15,7 @@ import { documents, documentSnapshots } from "@/db/schema-documents";
 import { versions } from "@/db/schema-versions";
 import { evaluateScenarioInput } from "@/lib/engine";
 import { compile, createScenarioDoc, readDoc, setParam } from "@/lib/notebook";
+import { saveVersion } from "@/lib/versions/server/versions";
 import { bodyOf, call } from "./support/http";
 import { teamWorkspace } from "./support/users";
 
@@ -115,5 +116,10 @@ describe("exports", () => {
     expect(json.scenario.cycle).toEqual({ dt_s: 10, speed_kmh: [0, 36, 36, 0] });
     // 50 + 100 + 50 m of trapezoids
     expect(json.result.kpi.distance_km).toBeCloseTo(0.2, 12);
+    // a saved version keeps the resolved samples in its Scenario (versions compile with the library too)
+    const version = await saveVersion({ userId: t.editor.id, workspaceId: t.workspaceId, documentId: d.id, name: "with depot cycle", message: "" });
+    expect(version.problems).toEqual([]);
+    const fromVersion = await bodyOf(await get(jsonRoute.GET, t, d.id, { cookie: t.viewer.cookie, query: `?version=${version.id}` }));
+    expect(fromVersion.scenario.cycle).toEqual({ dt_s: 10, speed_kmh: [0, 36, 36, 0] });
   });
 });

@@ -6,6 +6,7 @@ import { insertVersion, listVersions, type VersionListItem } from "@/db/versions
 import type { DocSnapshot } from "@/lib/notebook";
 import { NotFound } from "@/lib/http/errors";
 import { docFromState, snapshotOfState, versionContent } from "../content";
+import { libraryResolverFor } from "@/lib/library/resolver";
 import { diffVersions } from "../diff";
 import { applySnapshot } from "../restore";
 import type { NotebookDiff, ResultSummary, VersionSide } from "../types";
@@ -43,7 +44,8 @@ export async function saveVersion(args: DocArgs & { name: string; message: strin
   const { document } = await authorizeDocument({ ...args, action: "version.save" });
   assertWritable(document);
   const state = await loadDocumentState({ documentId: args.documentId });
-  const content = versionContent(snapshotOfState(state));
+  const snapshot = snapshotOfState(state);
+  const content = versionContent(snapshot, await libraryResolverFor({ workspaceId: args.workspaceId, blocks: snapshot.blocks }));
   const row = await insertVersion({
     documentId: args.documentId, name: args.name, message: args.message, authorId: args.userId, yjsState: state,
     scenario: content.scenario, resultSummary: content.summary, problems: content.problems,
@@ -69,9 +71,10 @@ export async function readVersion(args: DocArgs & { versionId: string }): Promis
 }
 
 /** One side of a diff: a stored version (no engine run) or "live" (compiled and evaluated now). */
-async function sideOf(documentId: string, ref: string): Promise<VersionSide & { ref: string }> {
+async function sideOf(documentId: string, ref: string, workspaceId: string): Promise<VersionSide & { ref: string }> {
   if (ref === "live") {
-    const content = versionContent(snapshotOfState(await loadDocumentState({ documentId })));
+    const snapshot = snapshotOfState(await loadDocumentState({ documentId }));
+    const content = versionContent(snapshot, await libraryResolverFor({ workspaceId, blocks: snapshot.blocks }));
     return { ref, label: "Live document", doc: content.snapshot, summary: content.summary };
   }
   const v = await requireVersion({ documentId, versionId: ref }).catch(() => {
@@ -82,7 +85,7 @@ async function sideOf(documentId: string, ref: string): Promise<VersionSide & { 
 
 export async function diffRefs(args: DocArgs & { from: string; to: string }): Promise<NotebookDiff & { fromRef: string; toRef: string }> {
   await authorizeDocument({ ...args, action: "version.read" });
-  const [a, b] = await Promise.all([sideOf(args.documentId, args.from), sideOf(args.documentId, args.to)]);
+  const [a, b] = await Promise.all([sideOf(args.documentId, args.from, args.workspaceId), sideOf(args.documentId, args.to, args.workspaceId)]);
   return { ...diffVersions(a, b), fromRef: a.ref, toRef: b.ref };
 }
 
