@@ -139,6 +139,8 @@ describe("notebook: two people in one document", () => {
     await a.page.keyboard.press("Control+A");
     await a.page.keyboard.insertText("2000 kg");
     await a.page.locator("[data-unsynced]").waitFor();
+    await b.page.waitForTimeout(1000);
+    expect(await massText(b.page)).toBe("curb_mass + payload");
     await pageShot(a.page, "nb4-editor-a-offline-unsynced");
     await a.context.setOffline(false);
     await a.page.locator('[data-connection="connected"]:not([data-unsynced])').waitFor({ timeout: 20_000 });

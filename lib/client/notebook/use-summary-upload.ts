@@ -1,6 +1,7 @@
 "use client";
 // After a successful evaluation that follows this person's own edit, send the headline figures
 // to the documents API (at most every THROTTLE_MS) so the documents table can sort by them.
+// While the browser is offline nothing is sent; the newest figures go out once it is back.
 import { useEffect, useRef } from "react";
 import type * as Y from "yjs";
 import type { Result } from "@/lib/engine";
@@ -13,6 +14,8 @@ export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspace
   const localEdit = useRef(false);
   const lastSent = useRef(0);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const latest = useRef<Result | null>(null);
+  latest.current = result && !stale ? result : null;
 
   useEffect(() => {
     const onUpdate = (_u: Uint8Array, _origin: unknown, _doc: Y.Doc, tr: Y.Transaction) => { if (tr.local) localEdit.current = true; };
@@ -21,16 +24,25 @@ export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspace
   }, [doc]);
 
   useEffect(() => {
-    if (!enabled || !result || stale || !localEdit.current) return;
+    if (!enabled) return;
     const send = () => {
       timer.current = null;
+      const current = latest.current;
+      if (!current || !localEdit.current || !navigator.onLine) return;
       localEdit.current = false;
       lastSent.current = Date.now();
-      putSummary(workspaceId, documentId, summaryKpi(result)).catch(() => { localEdit.current = true; });
+      putSummary(workspaceId, documentId, summaryKpi(current)).catch(() => { localEdit.current = true; });
     };
-    if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(send, Math.max(0, lastSent.current + THROTTLE_MS - Date.now()));
+    const plan = () => {
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = setTimeout(send, Math.max(0, lastSent.current + THROTTLE_MS - Date.now()));
+    };
+    if (latest.current && localEdit.current) plan();
+    window.addEventListener("online", plan);
+    return () => {
+      window.removeEventListener("online", plan);
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = null;
+    };
   }, [enabled, result, stale, workspaceId, documentId]);
-
-  useEffect(() => () => { if (timer.current) clearTimeout(timer.current); }, []);
 }
