@@ -10,9 +10,10 @@ import type { FromWorker, ToWorker } from "./protocol";
  * thread that serves HTTP. Each job gets its own worker thread (started on demand, ended when
  * the job ends or is cancelled, so a cancelled job frees its CPU at once even between two
  * abort checks). The worker loads the TypeScript engine through tsx's ESM hook, by file path
- * from the project root: the Next bundler never sees it.
+ * from the project root (JOULEBOOK_ROOT, else the working directory): the Next bundler never
+ * sees it.
  */
-export function workerExecutor(root = process.cwd()): JobExecutor {
+export function workerExecutor(root = process.env.JOULEBOOK_ROOT ?? process.cwd()): JobExecutor {
   const entry = pathToFileURL(join(root, "server/jobs/worker.ts")).href;
   const boot = `import("tsx/esm/api").then((m) => { m.register(); return import(${JSON.stringify(entry)}); })`;
   return (key, payload, hooks) =>
