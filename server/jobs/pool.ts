@@ -4,7 +4,6 @@ import { pathToFileURL } from "node:url";
 import type { JobExecutor } from "../../lib/engine/jobs/store";
 import type { FromWorker, ToWorker } from "./protocol";
 
-
 /**
  * Worker threads for long runs. A DP job is synchronous CPU work, so it must not run on the
  * thread that serves HTTP. Each job gets its own worker thread (started on demand, ended when

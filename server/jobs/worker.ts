@@ -1,8 +1,8 @@
 /**
- * Worker-thread entry: runs one job at a time from the pool (pool.ts), posts progress (share
- * of DP backward steps done) and the outcome. A cancel message aborts the job's signal, which
- * the DP checks every 64 backward steps. Imports are relative: this file runs under tsx, not
- * under the Next bundler.
+ * Worker-thread entry: runs the job the pool (pool.ts) sends, posts progress (share of DP
+ * backward steps done) and the outcome. A run is synchronous and reads no messages while it
+ * works, so the pool cancels by ending the thread; a cancel message only stops a run that has
+ * not started yet. Imports are relative: this file runs under tsx, not under the Next bundler.
  */
 import { parentPort } from "node:worker_threads";
 import { runJob } from "../../lib/engine/jobs/runner";
