@@ -58,7 +58,8 @@ export function interpolate(c: CostToGo, k: number, s: number): number {
   if (idx > m - 1) idx = m - 1;
   const base = k * c.stride + idx;
   const a = c.J[base];
-  return a + (pos - idx) * (c.J[base + 1] - a);
+  const v = a + (pos - idx) * (c.J[base + 1] - a);
+  return v === v ? v : Infinity; // an emptied row (all Infinity) gives Inf − Inf: infeasible, not NaN
 }
 
 /** Value on the line through (x0, v0) and (x1, v1) at x (constant when the nodes coincide). */
