@@ -132,3 +132,32 @@ describe("personal API tokens", () => {
     expect((await bodyOf(gone)).error).toBe("this API token's creator is no longer a member of its workspace");
   });
 });
+
+describe("POST /api/evaluate with a library cycle", () => {
+  it("replaces cycle.library_id by the item's samples: the token's workspace, or ?workspace= for a session", async () => {
+    const t = await teamWorkspace();
+    const other = await teamWorkspace();
+    const text = "time [s],speed [km/h]\n0,0\n10,36\n20,36\n30,0\n";
+    const confirmation = { delimiter: ",", decimal: ".", header_rows: 1, time: { column: 1, unit: "s" }, speed: { column: 2, unit: "km/h" }, grade: null };
+    const saved = await call(libraryRoute.POST, "POST", "/", { cookie: t.editor.cookie, body: { kind: "cycle", text, confirmation, name: "Depot" }, params: { workspaceId: t.workspaceId } });
+    const itemId = (await bodyOf(saved)).item.id;
+    const withLibrary = { ...scenario, cycle: { library_id: itemId } };
+    const { body } = await mint(t.viewer.cookie, t.workspaceId, "viewer");
+    const res = await call(evaluateRoute.POST, "POST", "/api/evaluate", { body: withLibrary, headers: bearer(body.token), origin: null });
+    expect(res.status).toBe(200);
+    // trapezoids 50 + 100 + 50 m
+    expect((await bodyOf(res)).kpi.distance_km).toBeCloseTo(0.2, 12);
+    const session = await call(evaluateRoute.POST, "POST", `/api/evaluate?workspace=${t.workspaceId}`, { body: withLibrary, cookie: t.reviewer.cookie });
+    expect(session.status).toBe(200);
+    const noWorkspace = await call(evaluateRoute.POST, "POST", "/api/evaluate", { body: withLibrary, cookie: t.reviewer.cookie });
+    expect(noWorkspace.status).toBe(422);
+    expect((await bodyOf(noWorkspace)).fields["cycle.library_id"]).toBe("name the workspace of the library: POST /api/evaluate?workspace=<id> (an API token uses its own)");
+    // another workspace's token cannot reach the item: it is not in that token's library
+    const { body: foreign } = await mint(other.owner.cookie, other.workspaceId, "viewer");
+    const denied = await call(evaluateRoute.POST, "POST", "/api/evaluate", { body: withLibrary, headers: bearer(foreign.token), origin: null });
+    expect(denied.status).toBe(422);
+    expect((await bodyOf(denied)).fields["cycle.library_id"]).toBe(`no item "${itemId}" in this workspace's library`);
+    // an outsider naming the workspace learns nothing
+    expect((await call(evaluateRoute.POST, "POST", `/api/evaluate?workspace=${t.workspaceId}`, { body: withLibrary, cookie: t.outsider.cookie })).status).toBe(404);
+  });
+});
