@@ -11,16 +11,17 @@ import { enumerate, tinyPlant, tinyScenario } from "./tiny";
 //  * with a fine SOC grid (1e-4 spacing against moves of ~1e-2 per step) it must match the
 //    optimum to 0.1 % (interpolation error; our tolerance, no source).
 const CASES = [
-  { name: "series, 4 candidates", pt: "series" as const, v: [0, 7, 14, 20, 16, 8, 0], cp: 4 },
+  { name: "series, 4 candidates", pt: "series" as const, v: [0, 7, 14, 20, 16, 8, 0], cp: 4, dt: 1 },
   { name: "series, 3 candidates", pt: "series" as const, v: [0, 8, 16, 22, 26, 20, 12], cp: 3 },
   { name: "parallel, 4 candidates in traction", pt: "parallel" as const, v: [0, 7, 14, 21, 27, 32, 36], cp: 3 },
+  { name: "series, 4 candidates, dt = 2 s", pt: "series" as const, v: [0, 12, 22, 30, 24, 12, 0], cp: 4, dt: 2 },
 ];
 
 describe("DP against brute-force enumeration (exact model, tiny problems)", () => {
   for (const c of CASES) {
     for (const window of [[0.49, 0.51], [0.5, 0.8], [0.3, 0.47]] as [number, number][]) {
       it(`${c.name}, window ${window.join("–")}`, () => {
-        const s = tinyScenario(c.pt, c.v, window, c.cp);
+        const s = tinyScenario(c.pt, c.v, window, c.cp, c.dt ?? 1);
         const plant = tinyPlant(s);
         const e = enumerate(plant, c.cp, window);
         for (const socPoints of [5001, 3]) {

@@ -6,9 +6,9 @@ import { isHybrid } from "@/lib/engine/strategies/optimising";
 import { example, parsed } from "../helpers";
 
 /** A 6-step hybrid scenario with a 1 Ah pack, so that one step moves SOC by a few percent. */
-export function tinyScenario(powertrain: "series" | "parallel", speed_kmh: number[], window: [number, number], controlPoints: number): Scenario {
+export function tinyScenario(powertrain: "series" | "parallel", speed_kmh: number[], window: [number, number], controlPoints: number, dt_s = 1): Scenario {
   const raw = example(powertrain);
-  raw.cycle = { dt_s: 1, speed_kmh };
+  raw.cycle = { dt_s, speed_kmh };
   raw.battery = { ...raw.battery, capacity_ah: 1, soc_initial: 0.5, soc_min: 0.3, soc_max: 0.8, max_discharge_c: 150, max_charge_c: 40 };
   raw.strategy = { kind: "dp", soc_points: 201, control_points: controlPoints, soc_final_min: window[0], soc_final_max: window[1] };
   return parsed(raw);
