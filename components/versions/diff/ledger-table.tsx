@@ -14,10 +14,10 @@ function Row({ r }: { r: LedgerDelta }) {
     <Fragment>
       <tr className="border-b border-rule/60" data-ledger-row={r.key}>
         <th scope="row" className="py-1.5 pr-2 text-left font-normal">{r.label}</th>
-        <td className="px-2 py-1.5 text-right font-mono">{fmtGrouped(r.from_j)}</td>
-        <td className="px-2 py-1.5 text-right font-mono">{fmtGrouped(r.to_j)}</td>
-        <td className={`px-2 py-1.5 text-right font-mono ${r.side === "sink" ? deltaClass(r.delta_j) : ""}`}>{r.delta_j === null ? "—" : (r.delta_j > 0 ? "+" : "") + fmtGrouped(r.delta_j)}</td>
-        <td className="px-2 py-1.5 text-right font-mono">{signed(r.delta_j === null ? null : r.delta_j / 3.6e6, 4)}</td>
+        <td className="px-2 py-1.5 text-right font-mono whitespace-nowrap">{fmtGrouped(r.from_j)}</td>
+        <td className="px-2 py-1.5 text-right font-mono whitespace-nowrap">{fmtGrouped(r.to_j)}</td>
+        <td className={`px-2 py-1.5 text-right font-mono whitespace-nowrap ${r.side === "sink" ? deltaClass(r.delta_j === null ? null : Math.round(r.delta_j)) : ""}`}>{r.delta_j === null ? "—" : (r.delta_j > 0 ? "+" : "") + fmtGrouped(r.delta_j)}</td>
+        <td className="px-2 py-1.5 text-right font-mono whitespace-nowrap">{signed(r.delta_j === null ? null : r.delta_j / 3.6e6, 4)}</td>
         <td className="py-1.5 pl-2 text-right"><AnchorToggle anchor={anchor} label={label} open={open} onToggle={() => setOpen(!open)} /></td>
       </tr>
       {open ? <tr><td colSpan={6}><AnchorPanel anchor={anchor} label={label} /></td></tr> : null}
