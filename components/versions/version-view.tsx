@@ -4,7 +4,8 @@
 import { Fragment, useState } from "react";
 import { BLOCK_TITLES, type BlockKind } from "@/lib/notebook/block-kinds";
 import { parameterKey, type Anchor } from "@/lib/versions/anchors";
-import { fmtGrouped } from "@/lib/client/notebook/format";
+import { fmt, fmtGrouped } from "@/lib/client/notebook/format";
+import { sameAsText } from "./diff/delta";
 import { AnchorPanel, AnchorToggle } from "@/components/comments/anchor-threads";
 
 export interface ViewParam { key: string; label: string; text: string; value: string | null; error?: string }
@@ -45,7 +46,7 @@ function BlockView({ b }: { b: ViewBlock }) {
                 <th scope="row" className="w-1/3 py-1.5 pr-2 text-left font-normal">{p.label}</th>
                 <td className="py-1.5">
                   <code className="font-mono text-[0.85rem]">{p.text || "(empty)"}</code>
-                  {p.value && p.value !== p.text.trim() ? <span className="ml-2 font-mono text-xs text-muted">= {p.value}</span> : null}
+                  {p.value && !sameAsText(p.text, p.value) ? <span className="ml-2 font-mono text-xs text-muted">= {p.value}</span> : null}
                   {p.error ? <span className="block text-xs text-danger">{p.error}</span> : null}
                 </td>
               </Anchored>
@@ -78,8 +79,8 @@ export function VersionLedger({ rows }: { rows: ViewLedgerRow[] }) {
         {visible.map((r) => (
           <Anchored key={r.key} anchor={{ kind: "ledger_row", key: r.key }} label={`Loss ledger › ${r.label}`} cols={4}>
             <th scope="row" className="py-1.5 pr-2 text-left font-normal" data-ledger-row={r.key}>{r.label}{r.side === "supply" ? <span className="text-xs text-muted"> (supplied)</span> : null}</th>
-            <td className="px-2 py-1.5 text-right font-mono">{fmtGrouped(r.j)}</td>
-            <td className="px-2 py-1.5 text-right font-mono">{(r.j / 3.6e6).toFixed(4)}</td>
+            <td className="px-2 py-1.5 text-right font-mono whitespace-nowrap">{fmtGrouped(r.j)}</td>
+            <td className="px-2 py-1.5 text-right font-mono">{fmt(r.j / 3.6e6, 4)}</td>
           </Anchored>
         ))}
       </tbody>

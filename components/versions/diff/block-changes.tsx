@@ -7,7 +7,7 @@ import { BLOCK_TITLES } from "@/lib/notebook/block-kinds";
 import { parameterKey } from "@/lib/versions/anchors";
 import type { BlockDiff, ParamChange, ParamSide } from "@/lib/versions/types";
 import { AnchorPanel, AnchorToggle } from "@/components/comments/anchor-threads";
-import { signed } from "./delta";
+import { sameAsText, signed } from "./delta";
 
 const STATUS: Record<BlockDiff["status"], { text: string; cls: string }> = {
   added: { text: "added", cls: "bg-ok-soft text-ok" },
@@ -21,7 +21,7 @@ function Side({ side }: { side: ParamSide | null }) {
   return (
     <span className="flex flex-col">
       <code className="font-mono text-[0.85rem]">{side.text === "" ? "(empty)" : side.text}</code>
-      {side.value && side.value.text !== side.text.trim() ? <span className="font-mono text-xs text-muted">= {side.value.text}</span> : null}
+      {side.value && !sameAsText(side.text, side.value.text) ? <span className="font-mono text-xs text-muted">= {side.value.text}</span> : null}
       {side.error ? <span className="text-xs text-danger">{side.error}</span> : null}
     </span>
   );

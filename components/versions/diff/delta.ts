@@ -22,3 +22,12 @@ export function deltaClass(delta: number | null, lowerIsBetter = true): string {
   if (delta === null || delta === 0) return "text-muted";
   return (delta < 0) === lowerIsBetter ? "text-ok" : "text-danger";
 }
+
+/** Does the evaluated value only repeat the text ("0.30" and "0.3", "3.6, 2.1" and "3.6, 2.1")? */
+export function sameAsText(text: string, value: string): boolean {
+  const nums = (s: string) => s.replace(/−/g, "-").split(",").map((x) => x.trim());
+  const a = nums(text);
+  const b = nums(value);
+  if (a.length !== b.length) return false;
+  return a.every((x, i) => x === b[i] || (x !== "" && Number.isFinite(Number(x)) && Number(x) === Number(b[i])));
+}
