@@ -3,6 +3,7 @@ import { prepareJob } from "@/lib/engine/jobs/runner";
 import { json, route } from "@/lib/http/route";
 import { TooManyRequests } from "@/lib/http/errors";
 import { serverJobs } from "@/server/jobs";
+import { resolveScenarioLibrary } from "@/lib/library/scenario-refs";
 
 const BODY_LIMIT_BYTES = 1024 * 1024;
 const MAX_JOBS_PER_USER = 4;
@@ -14,7 +15,9 @@ const bodySchema = z.strictObject({ scenario: z.unknown(), compare: z.boolean().
 // here first, so a bad one is a 422 at once, as in POST /api/evaluate.
 export const POST = route({ body: bodySchema, maxBodyBytes: BODY_LIMIT_BYTES }, async (ctx, body) => {
   const { user } = await ctx.requireUser();
-  const prepared = prepareJob({ scenario: body.scenario, compare: body.compare });
+  // `cycle: { library_id }` → the library item's samples, as in POST /api/evaluate (?workspace=<id> for a session).
+  const scenario = await resolveScenarioLibrary({ userId: user.id, body: body.scenario, workspaceId: new URL(ctx.request.url).searchParams.get("workspace") });
+  const prepared = prepareJob({ scenario, compare: body.compare });
   if (!prepared.ok) {
     const fields: Record<string, string> = {};
     for (const e of prepared.errors) fields[`scenario.${e.path}`] ??= e.message;
@@ -24,7 +27,7 @@ export const POST = route({ body: bodySchema, maxBodyBytes: BODY_LIMIT_BYTES }, 
   let mine = 0;
   for (const [id, owner] of owners) if (owner === user.id && store.get(id)?.state === "running") mine++;
   if (mine >= MAX_JOBS_PER_USER) throw new TooManyRequests(5, "too many long runs at once; wait for one to finish or cancel it");
-  const status = store.submit(prepared.key, { scenario: body.scenario, compare: body.compare === true });
+  const status = store.submit(prepared.key, { scenario, compare: body.compare === true });
   if (!status) throw new TooManyRequests(5, "the server is busy with other long runs; try again shortly");
   owners.set(status.id, user.id);
   return json({ jobId: status.id, state: status.state, cached: status.cached }, 202);
