@@ -9,6 +9,7 @@ import { getDb } from "@/db/client";
 import { documents, documentSnapshots } from "@/db/schema-documents";
 import { libraryItems } from "@/db/schema-library";
 import { createScenarioDoc, readDoc, setParam } from "@/lib/notebook";
+import { UPLOAD_REQUEST_LIMIT_BYTES } from "@/lib/library/request";
 import { APP, bodyOf, call } from "./support/http";
 import { teamWorkspace } from "./support/users";
 
@@ -108,6 +109,15 @@ describe("team library API", () => {
     const ok = await call(itemRoute.DELETE, "DELETE", "/", { cookie: t.editor.cookie, params: { workspaceId: t.workspaceId, itemId: item.id } });
     expect(ok.status).toBe(204);
     expect((await bodyOf(await list(t.workspaceId, t.editor.cookie))).items).toHaveLength(0);
+  });
+
+  it("a request body above the upload cap is refused with 413 before it is read", async () => {
+    const t = await teamWorkspace();
+    const res = await call(previewRoute.POST, "POST", "/", {
+      cookie: t.editor.cookie, params: { workspaceId: t.workspaceId }, rawBody: "{}",
+      headers: { "content-type": "application/json", "content-length": String(UPLOAD_REQUEST_LIMIT_BYTES + 1) },
+    });
+    expect(res.status).toBe(413);
   });
 
   it("an item of another workspace is 404 by id", async () => {
