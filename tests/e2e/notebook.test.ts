@@ -127,10 +127,14 @@ describe("notebook: two people in one document", () => {
     await pageShot(reviewer.page, "nb3-reviewer-read-only");
 
     // Undo is per person: A's Ctrl+Z restores the formula for everyone.
+    // A's figures reach the documents list (throttled PUT …/summary) after A's own edits.
+    const summaryPut = a.page.waitForResponse((r) => r.url().endsWith("/summary") && r.request().method() === "PUT", { timeout: 15_000 });
     await massField(a.page).click();
     await a.page.keyboard.press("Control+Z");
     await expect.poll(() => massText(b.page), { timeout: 10_000 }).toBe("curb_mass + payload");
     await expect.poll(() => fuelFigure(b.page).innerText(), { timeout: 10_000 }).toBe(before);
+
+    expect((await summaryPut).status()).toBe(200);
 
     // Offline: A's edit stays in A's tab (badge says so), and arrives when A is back online.
     await a.context.setOffline(true);
