@@ -62,6 +62,9 @@ export function recognizeCycle(dt_s: number, speed_kmh: readonly number[]): Reco
     ];
     return verdict(u.name, checks, `duration, distance and top speed; ${u.source}`);
   }
+  const near = [{ name: WLTC_3B.name, duration_s: WLTC_3B.duration_s }, ...R83_CYCLES, ...US_CYCLES].find((c) => Math.abs(c.duration_s - duration) === 1);
+  if (near)
+    return { match: null, label: `not a published cycle: ${speed_kmh.length} samples; ${near.name} has ${near.duration_s + 1} (0 to ${near.duration_s} s at 1 Hz), check the first and last rows`, checks: [] };
   const known = [`${WLTC_3B.name} ${WLTC_3B.duration_s} s`, ...R83_CYCLES.map((r) => `${r.name} ${r.duration_s} s`), ...US_CYCLES.map((u) => `${u.name} ${u.duration_s} s`)];
   return { match: null, label: `not a published cycle: its ${fmt(duration)} s duration matches none of ${known.join(", ")}`, checks: [] };
 }

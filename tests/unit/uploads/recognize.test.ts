@@ -80,6 +80,11 @@ describe("published-cycle recognition", () => {
       "has the duration of UDDS but not its figures: distance (km) 11.408, published 11.990; max speed (km/h) 30.0, published 91.2");
   });
 
+  it("points at a missing first or last row when the length is one sample off", () => {
+    // a common copy of the WLTC table runs 1..1800 s: 1800 samples instead of 1801
+    expect(recognizeCycle(1, syntheticWltc().slice(1)).label).toBe("not a published cycle: 1800 samples; WLTC class 3b has 1801 (0 to 1800 s at 1 Hz), check the first and last rows");
+  });
+
   it("says when no published cycle has the duration, and when the step is not 1 s", () => {
     expect(recognizeCycle(1, [0, 1, 2]).label).toMatch(/^not a published cycle: its 2 s duration matches none of WLTC class 3b 1800 s/);
     expect(recognizeCycle(0.5, [0, 1, 2]).label).toBe("published cycles are checked at 1 Hz; this cycle has a 0.5 s step");
