@@ -21,7 +21,7 @@ export function ThreadCard({ thread, showAnchor = false }: { thread: ThreadJson;
     }
   };
   return (
-    <article id={`thread-${thread.id}`} data-thread={thread.anchor.key}
+    <article id={showAnchor ? `thread-${thread.id}` : undefined} data-thread={thread.anchor.key}
       className={`rounded-control border px-3 py-2 text-sm ${thread.resolved ? "border-rule bg-paper-sunk/60" : "border-rule-strong bg-paper-raised"}`}>
       <header className="mb-1 flex flex-wrap items-center gap-2 text-xs text-muted">
         {showAnchor ? <span className="font-medium text-ink">{thread.anchor.label}</span> : null}
