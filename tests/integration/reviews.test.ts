@@ -2,6 +2,7 @@
 // the round's state follows (any "changes requested" wins, all approvals approve); e-mails.
 import { beforeAll, describe, expect, it } from "vitest";
 import * as reviewsRoute from "@/app/api/workspaces/[workspaceId]/documents/[documentId]/reviews/route";
+import * as documentsRoute from "@/app/api/workspaces/[workspaceId]/documents/route";
 import * as verdictRoute from "@/app/api/workspaces/[workspaceId]/documents/[documentId]/reviews/[roundId]/verdict/route";
 import { addMembership } from "@/db/memberships";
 import { listOutboxMessages } from "@/db/outbox";
@@ -67,6 +68,8 @@ describe("review rounds", () => {
     expect(toEditor.some((m) => m.text.includes(`/documents/${documentId}/reviews#round-${roundId}`))).toBe(true);
     const states = await latestRoundStates({ documentIds: [documentId] });
     expect(states.get(documentId)).toMatchObject({ state: "changes_requested", versionNumber: 2 });
+    const table = await bodyOf(await call(documentsRoute.GET, "GET", "/", { cookie: team.viewer.cookie, params: { workspaceId: team.workspaceId } }));
+    expect(table.documents.find((d: { id: string }) => d.id === documentId).review).toEqual({ state: "changes_requested", versionNumber: 2 });
 
     // the reviewer changes their mind: every reviewer approves → approved
     const later = await verdict(team.reviewer, documentId, roundId, { verdict: "approve", comment: "fixed in the data sheet" });
