@@ -35,10 +35,12 @@ export async function saveToLibrary(args: { userId: string; workspaceId: string;
   return { preview, id };
 }
 
-export async function readLibraryItem(args: { userId: string; workspaceId: string; itemId: string }) {
+/** The item with its data; `withUsage` also reads every document of the workspace (the notebook's fetch skips it). */
+export async function readLibraryItem(args: { userId: string; workspaceId: string; itemId: string; withUsage: boolean }) {
   await authorizeWorkspace({ userId: args.userId, workspaceId: args.workspaceId, action: "library.read" });
   const item = isUuid(args.itemId) ? await getLibraryItem({ workspaceId: args.workspaceId, itemId: args.itemId }) : null;
   if (!item) throw new NotFound("no such library item in this workspace");
+  if (!args.withUsage) return item;
   const usage = await documentsUsingLibrary({ workspaceId: args.workspaceId });
   return { ...item, usedBy: usage.get(item.id) ?? [] };
 }

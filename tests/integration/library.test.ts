@@ -98,6 +98,8 @@ describe("team library API", () => {
     const { item } = await bodyOf(await confirmedSave(t.workspaceId, t.editor.cookie));
     const d1 = await documentUsing(t.workspaceId, item.id, "Van A");
     const d2 = await documentUsing(t.workspaceId, item.id, "Van B");
+    const one = await bodyOf(await call(itemRoute.GET, "GET", `/api/workspaces/${t.workspaceId}/library/${item.id}?usage=1`, { cookie: t.viewer.cookie, params: { workspaceId: t.workspaceId, itemId: item.id } }));
+    expect(one.item.usedBy.map((d: { title: string }) => d.title)).toEqual(["Van A", "Van B"]);
     const listed = (await bodyOf(await list(t.workspaceId, t.editor.cookie))).items[0];
     expect(listed.usedBy.map((d: { id: string }) => d.id).sort()).toEqual([d1, d2].sort());
     const del = await call(itemRoute.DELETE, "DELETE", "/", { cookie: t.editor.cookie, params: { workspaceId: t.workspaceId, itemId: item.id } });

@@ -3,9 +3,11 @@ import { readLibraryItem, removeLibraryItem } from "@/lib/library/service";
 
 type Params = { workspaceId: string; itemId: string };
 
+// ?usage=1 adds usedBy (documents whose drive-cycle blocks name the item).
 export const GET = route<Params>({}, async (ctx) => {
   const { user } = await ctx.requireUser();
-  return json({ item: await readLibraryItem({ userId: user.id, workspaceId: ctx.params.workspaceId, itemId: ctx.params.itemId }) });
+  const withUsage = new URL(ctx.request.url).searchParams.get("usage") === "1";
+  return json({ item: await readLibraryItem({ userId: user.id, workspaceId: ctx.params.workspaceId, itemId: ctx.params.itemId, withUsage }) });
 });
 
 // 409 with the documents that use it; they must change their blocks first.
