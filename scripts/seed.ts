@@ -6,11 +6,13 @@
 import { closeDb } from "../db/pool";
 import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE_NAME, seedFoundation } from "./seed/foundation";
 import { seedDemoDocuments } from "./seed/demo-documents";
+import { seedDemoLibrary } from "./seed/demo-library";
 import type { SeedContext, SeedStep } from "./seed/types";
 
 const STEPS: SeedStep[] = [
   { name: "demo team and workspace", run: seedFoundation },
   { name: "demo van documents", run: seedDemoDocuments },
+  { name: "demo team library", run: seedDemoLibrary },
 ];
 
 function printSignins(): void {
