@@ -10,6 +10,7 @@ import { chargeSustainingWarning, infeasibleFindings, parameterWarnings, socPinn
 import { RESULT_FORMAT_V1, type Kpi, type Result, type Traces } from "./result";
 import type { Demand } from "./demand";
 import { G_PER_KG, J_PER_KWH, radSToRpm } from "./units";
+import { demandOverflow, ledgerOverflow } from "./overflow";
 
 export type EvaluateOutcome = { ok: true; result: Result } | { ok: false; errors: ScenarioError[] };
 
@@ -86,7 +87,6 @@ function kpi(s: Scenario, d: Demand, run: Run): Kpi {
   };
 }
 
-/** Evaluates a validated scenario. Fails only for a strategy kind this build lacks. */
 export interface EvaluateOptions {
   /** Add `step_ledger_w` (15 arrays of N) to the Result. */
   stepLedger?: boolean;
@@ -95,8 +95,14 @@ export interface EvaluateOptions {
   onProgress?: (share: number) => void;
 }
 
+/**
+ * Evaluates a validated scenario. Fails only for a strategy kind this build lacks, a DP too
+ * large for memory, or magnitudes beyond double precision (overflow.ts).
+ */
 export function evaluateScenario(s: Scenario, options: EvaluateOptions = {}): EvaluateOutcome {
   const { cycle, demand, plant } = prepare(s);
+  const overflow = demandOverflow(demand);
+  if (overflow) return { ok: false, errors: [overflow] };
   const made = makeStrategy(s, plant, { signal: options.signal, onProgress: options.onProgress });
   if (!made.ok) {
     const message = `strategy.kind: ${made.reason}`;
@@ -104,6 +110,8 @@ export function evaluateScenario(s: Scenario, options: EvaluateOptions = {}): Ev
   }
   const socInitial = s.battery && s.powertrain !== "conventional" ? s.battery.soc_initial : 0;
   const run = simulate(plant, made.strategy, socInitial, options.stepLedger === true);
+  const ledgerError = ledgerOverflow(run.ledger);
+  if (ledgerError) return { ok: false, errors: [ledgerError] };
   const v = s.vehicle;
   const stats = cycleStats(cycle, {
     inertial_mass_kg: v.mass_kg * (1 + v.rotating_mass_factor), mass_kg: v.mass_kg,
