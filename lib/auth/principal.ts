@@ -10,9 +10,13 @@ import type { CurrentSession } from "./session";
 
 export type TokenPrincipal = { kind: "token"; session: CurrentSession; scope: TokenScope };
 
-/** Where tokens are accepted: POST /api/evaluate and reads under /api/workspaces/<id>/. */
+/**
+ * Where tokens are accepted: POST /api/evaluate, the long-run jobs of the same user (start, poll,
+ * cancel), and reads under /api/workspaces/<id>/.
+ */
 export function tokenAccepted(method: string, pathname: string): boolean {
-  if (method === "POST" && pathname === "/api/evaluate") return true;
+  if (method === "POST" && (pathname === "/api/evaluate" || pathname === "/api/evaluate/jobs")) return true;
+  if ((method === "GET" || method === "DELETE") && /^\/api\/evaluate\/jobs\/[^/]+$/.test(pathname)) return true;
   return (method === "GET" || method === "HEAD") && /^\/api\/workspaces\/[^/]+(\/|$)/.test(pathname);
 }
 
@@ -29,7 +33,7 @@ export async function tokenPrincipal(request: Request): Promise<TokenPrincipal |
     throw new Unauthorized("this API token's creator is no longer a member of its workspace");
   const { pathname } = new URL(request.url);
   if (!tokenAccepted(request.method, pathname))
-    throw new Forbidden("API tokens are accepted only by POST /api/evaluate and GET requests under /api/workspaces/<id>/");
+    throw new Forbidden("API tokens are accepted only by POST /api/evaluate, /api/evaluate/jobs and GET requests under /api/workspaces/<id>/");
   return {
     kind: "token",
     session: { user: found.user, sessionId: `token:${found.id}` },

@@ -5,6 +5,8 @@ import { describe, expect, it } from "vitest";
 import * as tokensRoute from "@/app/api/tokens/route";
 import * as tokenRoute from "@/app/api/tokens/[tokenId]/route";
 import * as evaluateRoute from "@/app/api/evaluate/route";
+import * as jobsRoute from "@/app/api/evaluate/jobs/route";
+import * as jobRoute from "@/app/api/evaluate/jobs/[id]/route";
 import * as workspaceRoute from "@/app/api/workspaces/[workspaceId]/route";
 import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
 import * as libraryRoute from "@/app/api/workspaces/[workspaceId]/library/route";
@@ -64,6 +66,19 @@ describe("personal API tokens", () => {
     expect(row.lastUsedAt).toBeInstanceOf(Date);
   });
 
+  it("starts and polls a long-run job (POST /api/evaluate/jobs, GET /api/evaluate/jobs/:id)", async () => {
+    const t = await teamWorkspace();
+    const { body } = await mint(t.viewer.cookie, t.workspaceId, "viewer");
+    const started = await call(jobsRoute.POST, "POST", "/api/evaluate/jobs", { body: { scenario }, headers: bearer(body.token), origin: null });
+    expect(started.status).toBe(202);
+    const { jobId } = await bodyOf(started);
+    const polled = await call(jobRoute.GET, "GET", `/api/evaluate/jobs/${jobId}`, { headers: bearer(body.token), params: { id: jobId } });
+    expect(polled.status).toBe(200);
+    // the job belongs to the token's creator: their session sees it too, another user does not
+    expect((await call(jobRoute.GET, "GET", `/api/evaluate/jobs/${jobId}`, { cookie: t.viewer.cookie, params: { id: jobId } })).status).toBe(200);
+    expect((await call(jobRoute.GET, "GET", `/api/evaluate/jobs/${jobId}`, { cookie: t.editor.cookie, params: { id: jobId } })).status).toBe(404);
+  });
+
   it("reads its own workspace; another workspace of the same user is 404", async () => {
     const owner = await newUser("owner");
     const a = await newWorkspace(owner, "A");
@@ -90,7 +105,7 @@ describe("personal API tokens", () => {
       body: { email: "x@example.com", role: "viewer" }, headers: bearer(body.token), params: { workspaceId: ws }, origin: null,
     });
     expect(invite.status).toBe(403);
-    expect((await bodyOf(invite)).error).toBe("API tokens are accepted only by POST /api/evaluate and GET requests under /api/workspaces/<id>/");
+    expect((await bodyOf(invite)).error).toBe("API tokens are accepted only by POST /api/evaluate, /api/evaluate/jobs and GET requests under /api/workspaces/<id>/");
     const mintWithToken = await call(tokensRoute.POST, "POST", "/api/tokens", { body: { workspaceId: ws, name: "x", role: "viewer" }, headers: bearer(body.token), origin: null });
     expect(mintWithToken.status).toBe(403);
   });
