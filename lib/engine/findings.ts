@@ -25,6 +25,13 @@ function fmt(x: number): string {
   return a >= 100 ? x.toFixed(0) : a >= 1 ? x.toFixed(2) : x.toPrecision(3);
 }
 
+/** Both figures in the short form, with more digits when that would print them alike. */
+function fmtPair(a: number, b: number): [string, string] {
+  let sa = fmt(a), sb = fmt(b);
+  for (let digits = 4; sa === sb && a !== b && digits <= 12; digits++) [sa, sb] = [a.toPrecision(digits), b.toPrecision(digits)];
+  return [sa, sb];
+}
+
 function episodeFinding(e: Episode[], d: Demand): Finding {
   const first = e[0];
   const info = VIOLATION_INFO[first.violation];
@@ -40,12 +47,13 @@ function episodeFinding(e: Episode[], d: Demand): Finding {
   const dem = worst.demanded * info.scale;
   const av = worst.available * info.scale;
   const unit = info.unit ? ` ${info.unit}` : "";
+  const [demText, avText] = fmtPair(dem, av);
   const where = e.length > 1 ? `${e.length} episodes between t = ${fmt(t0)} s and ${fmt(t1)} s` : `t = ${fmt(t0)}–${fmt(t1)} s`;
   return {
     severity: "infeasible",
     code: info.code,
     component: info.component,
-    message: `${info.what}: ${where} (${steps} step${steps === 1 ? "" : "s"}); worst at t = ${fmt(d.time_s[worst.worstStep])} s: ${fmt(dem)}${unit} demanded, ${fmt(av)}${unit} available`,
+    message: `${info.what}: ${where} (${steps} step${steps === 1 ? "" : "s"}); worst at t = ${fmt(d.time_s[worst.worstStep])} s: ${demText}${unit} demanded, ${avText}${unit} available`,
     time_start_s: t0,
     time_end_s: t1,
     steps,
