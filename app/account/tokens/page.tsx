@@ -17,7 +17,7 @@ export default async function TokensPage() {
     <UserPage>
       <PageTitle title="API tokens">
         <p>
-          Personal tokens for scripts: <code className="font-mono">Authorization: Bearer jb_…</code> on <code className="font-mono">POST /api/evaluate</code> and
+          Personal tokens for scripts: <code className="font-mono">Authorization: Bearer jb_…</code> on <code className="font-mono">POST /api/evaluate</code> (and its long-run <code className="font-mono">/jobs</code>) and
           on read requests under <code className="font-mono">/api/workspaces/&lt;id&gt;/</code> (documents, exports, library). A token reaches one workspace, with a
           role no higher than yours there; it is shown once and stored only as a hash.
         </p>
