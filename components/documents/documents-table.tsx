@@ -44,8 +44,8 @@ function KpiCell({ row }: { row: DocumentRow }) {
   const { kpi } = useActions();
   const feasible = row.summary?.kpi.feasible;
   return (
-    <span className="font-mono num">
-      {kpiCell(row, kpi)}
+    <span className="num font-mono">
+      {(() => { const text = kpiCell(row, kpi); return /^no /.test(text) ? <span className="font-sans text-xs text-muted">{text}</span> : text; })()}
       {feasible === false ? <span className="ml-2 rounded-full bg-danger-soft px-1.5 font-sans text-xs text-danger">infeasible</span> : null}
     </span>
   );

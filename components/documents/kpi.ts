@@ -1,5 +1,4 @@
 // Which headline figure the documents table shows and sorts by.
-import type { PowertrainKind } from "@/lib/notebook";
 import type { DocumentRow, SummaryKpiKey } from "@/lib/client/notebook/documents-api";
 import { fmt } from "@/lib/client/notebook/format";
 
@@ -12,11 +11,10 @@ export const KPI_CHOICES: { key: SummaryKpiKey; label: string; unit: string; dec
 /** The figure that matters most for a powertrain when no column is chosen (for the subtitle). */
 export function kpiCell(row: DocumentRow, key: SummaryKpiKey): string {
   const choice = KPI_CHOICES.find((c) => c.key === key)!;
+  // Not applicable rather than a misleading zero: no fuel without an engine, no traction battery in a conventional car.
+  if (row.powertrain === "bev" && (key === "fuel_l_per_100km" || key === "co2_g_per_km")) return "no engine";
+  if (row.powertrain === "conventional" && key === "electric_kwh_per_100km") return "no battery";
   const v = row.summary?.kpi[key];
   if (typeof v !== "number" || !Number.isFinite(v)) return "—";
   return `${fmt(v, choice.decimals)} ${choice.unit}`;
-}
-
-export function relevantKpi(powertrain: PowertrainKind): SummaryKpiKey {
-  return powertrain === "bev" ? "electric_kwh_per_100km" : "fuel_l_per_100km";
 }

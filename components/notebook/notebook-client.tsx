@@ -3,6 +3,7 @@
 // The collaboration URL comes from the server at request time (never baked into the bundle).
 import { useMemo } from "react";
 import type { PowertrainKind } from "@/lib/notebook";
+import type { SummaryKpi } from "@/lib/client/notebook/documents-api";
 import { makePresenceUser } from "@/lib/client/notebook/presence";
 import { useCollab } from "@/lib/client/notebook/use-collab";
 import { Notebook } from "./notebook";
@@ -17,6 +18,8 @@ export interface NotebookClientProps {
   user: { id: string; name: string };
   name: string;
   powertrain: PowertrainKind | null;
+  /** headline figures stored with the document (null when none yet) */
+  summary: SummaryKpi | null;
 }
 
 export function NotebookClient(props: NotebookClientProps) {
@@ -25,6 +28,6 @@ export function NotebookClient(props: NotebookClientProps) {
   if (!collab) return <p className="py-section text-center text-sm text-muted">Opening the document…</p>;
   return (
     <Notebook collab={collab} canEdit={props.canEdit} archived={props.archived} role={props.role} workspaceId={props.workspaceId} documentId={props.documentId}
-      fallbackName={props.name} fallbackPowertrain={props.powertrain} />
+      fallbackName={props.name} fallbackPowertrain={props.powertrain} storedSummary={props.summary} />
   );
 }

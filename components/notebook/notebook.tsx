@@ -12,6 +12,7 @@ import { usePeers } from "@/lib/client/notebook/use-peers";
 import { setFocusedBlock } from "@/lib/client/notebook/presence";
 import { findingsByBlock } from "@/lib/client/notebook/findings";
 import { useSummaryUpload } from "@/lib/client/notebook/use-summary-upload";
+import type { SummaryKpi } from "@/lib/client/notebook/documents-api";
 import { useStableEntries } from "@/lib/client/notebook/stable";
 import type { Peer } from "@/lib/client/notebook/presence";
 import { Button } from "@/components/ui/button";
@@ -33,20 +34,21 @@ export interface NotebookProps {
   documentId: string;
   fallbackName: string;
   fallbackPowertrain: PowertrainKind | null;
+  storedSummary: SummaryKpi | null;
 }
 
 const NO_FINDINGS: Finding[] = [];
 const NO_MESSAGES: CompileMessage[] = [];
 const NO_PEERS: Peer[] = [];
 
-export function Notebook({ collab, canEdit, archived, role, workspaceId, documentId, fallbackName, fallbackPowertrain }: NotebookProps) {
+export function Notebook({ collab, canEdit, archived, role, workspaceId, documentId, fallbackName, fallbackPowertrain, storedSummary }: NotebookProps) {
   const { doc, awareness } = collab;
   const undo = useUndo(doc, canEdit);
   const evaluation = useEvaluation(collab.synced ? doc : null, workspaceId);
   const blocks = useBlocks(doc, canEdit);
   const meta = useMeta(doc);
   const peers = usePeers(awareness);
-  useSummaryUpload({ doc, enabled: canEdit, workspaceId, documentId, result: evaluation.result, stale: evaluation.stale });
+  useSummaryUpload({ doc, enabled: canEdit, workspaceId, documentId, result: evaluation.result, stale: evaluation.stale, stored: storedSummary });
   const focusBlock = useCallback((id: string) => setFocusedBlock(awareness, id), [awareness]);
 
   // Per-block props keep their identity while unchanged, so a recalculation or a cursor move

@@ -128,7 +128,13 @@ describe("notebook: two people in one document", () => {
 
     // Undo is per person: A's Ctrl+Z restores the formula for everyone.
     // A's figures reach the documents list (throttled PUT …/summary) after A's own edits.
-    const summaryPut = a.page.waitForResponse((r) => r.url().endsWith("/summary") && r.request().method() === "PUT", { timeout: 15_000 });
+    // (the one carrying the restored figure; earlier uploads may still be under way).
+    const restored = (r: { url(): string; request(): { method(): string; postDataJSON(): unknown } }) => {
+      if (!r.url().endsWith("/summary") || r.request().method() !== "PUT") return false;
+      const kpi = (r.request().postDataJSON() as { kpi: { fuel_l_per_100km: number } }).kpi;
+      return kpi.fuel_l_per_100km.toFixed(2) === before;
+    };
+    const summaryPut = a.page.waitForResponse(restored, { timeout: 15_000 });
     await massField(a.page).click();
     await a.page.keyboard.press("Control+Z");
     await expect.poll(() => massText(b.page), { timeout: 10_000 }).toBe("curb_mass + payload");

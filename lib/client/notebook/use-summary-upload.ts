@@ -1,17 +1,31 @@
 "use client";
 // After a successful evaluation that follows this person's own edit, send the headline figures
 // to the documents API (at most every THROTTLE_MS) so the documents table can sort by them.
-// While the browser is offline nothing is sent; the newest figures go out once it is back.
+// Also once after opening when the stored figures are missing or differ (a document created from a
+// template has none yet). While the browser is offline nothing is sent; the newest figures go out
+// once it is back.
 import { useEffect, useRef } from "react";
 import type * as Y from "yjs";
 import type { Result } from "@/lib/engine";
-import { putSummary, summaryKpi } from "./documents-api";
+import { putSummary, summaryKpi, type SummaryKpi } from "./documents-api";
 
 export const THROTTLE_MS = 3000;
 
-export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspaceId: string; documentId: string; result: Result | null; stale: boolean }) {
-  const { doc, enabled, workspaceId, documentId, result, stale } = opts;
+/** Same figures? Compared at the precision the table shows, so float noise does not count. */
+function sameKpi(a: SummaryKpi, b: SummaryKpi | null | undefined): boolean {
+  if (!b) return false;
+  const round = (k: SummaryKpi) => JSON.stringify(Object.entries(k).sort().map(([key, v]) => [key, typeof v === "number" ? Number(v.toPrecision(6)) : v]));
+  return round(a) === round(b);
+}
+
+export function useSummaryUpload(opts: {
+  doc: Y.Doc; enabled: boolean; workspaceId: string; documentId: string; result: Result | null; stale: boolean;
+  /** the figures stored with the document when the page was loaded */
+  stored: SummaryKpi | null;
+}) {
+  const { doc, enabled, workspaceId, documentId, result, stale, stored } = opts;
   const localEdit = useRef(false);
+  const checkedStored = useRef(false);
   const lastSent = useRef(0);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const latest = useRef<Result | null>(null);
@@ -25,6 +39,10 @@ export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspace
 
   useEffect(() => {
     if (!enabled) return;
+    if (!checkedStored.current && result && !stale) {
+      checkedStored.current = true;
+      if (!sameKpi(summaryKpi(result), stored)) localEdit.current = true;
+    }
     const send = () => {
       timer.current = null;
       const current = latest.current;
@@ -44,5 +62,7 @@ export function useSummaryUpload(opts: { doc: Y.Doc; enabled: boolean; workspace
       if (timer.current) clearTimeout(timer.current);
       timer.current = null;
     };
+    // `stored` is read once, on the first result.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [enabled, result, stale, workspaceId, documentId]);
 }

@@ -5,6 +5,7 @@ import { can } from "@/lib/authz/policy";
 import { isUuid } from "@/lib/authz";
 import { loadWorkspace } from "@/components/workspace/load-workspace";
 import { NotebookClient } from "@/components/notebook/notebook-client";
+import type { SummaryKpi } from "@/lib/client/notebook/documents-api";
 import { DocumentReviewBar } from "@/components/reviews/document-review-bar";
 import { ExportMenu } from "@/components/library/export-menu";
 
@@ -32,6 +33,7 @@ export default async function DocumentPage({ params }: { params: Promise<{ works
       user={{ id: user.id, name: user.name }}
       name={document.name}
       powertrain={document.powertrain}
+      summary={(document.summary?.kpi as SummaryKpi | undefined) ?? null}
     />
     </>
   );
