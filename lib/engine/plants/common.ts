@@ -97,6 +97,9 @@ export function bookBraking(out: Float64Array, d: Demand, k: number, shaft_w: nu
 export function regenerate(out: Float64Array, d: Demand, k: number, m: ElectricMachine, limit_nm: number, b: Battery, soc: number, busOther_w: number): number {
   const speed = d.shaft_rad_s[k];
   let p = d.shaft_w[k]; // ≤ 0: all the braking power the driveline could pass
+  // Geared to the shaft, the motor spins above its maximum while braking too: reported
+  // (DESIGN §4), and it does not regenerate there (the friction brakes take everything).
+  if (speed > m.max_rad_s * (1 + SLACK)) violate(out, V_MOTOR_SPEED, speed, m.max_rad_s);
   if (speed > m.max_rad_s) p = 0;
   const byTorque = -limit_nm * speed;
   if (p < byTorque) p = byTorque;
