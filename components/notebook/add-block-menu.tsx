@@ -13,7 +13,7 @@ const GROUPS: { title: string; kinds: BlockKind[] }[] = [
 ];
 
 export function AddBlockMenu({ index }: { index?: number }) {
-  const { doc } = useNotebook();
+  const { doc, step } = useNotebook();
   const [open, setOpen] = useState(false);
   const root = useRef<HTMLDivElement>(null);
   useEffect(() => {
@@ -25,7 +25,8 @@ export function AddBlockMenu({ index }: { index?: number }) {
     return () => { document.removeEventListener("mousedown", close); document.removeEventListener("keydown", onKey); };
   }, [open]);
   const add = (kind: BlockKind) => {
-    const id = insertBlock(doc, kind, index);
+    let id = "";
+    step(() => { id = insertBlock(doc, kind, index); });
     setOpen(false);
     requestAnimationFrame(() => jumpToBlock(id));
   };

@@ -26,7 +26,7 @@ export interface BlockCardProps {
 }
 
 export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, messages, findings, peers, values }: BlockCardProps) {
-  const { doc, canEdit, focusBlock } = useNotebook();
+  const { doc, canEdit, focusBlock, step } = useNotebook();
   const { title, collapsed: sharedCollapsed } = useBlockProps(map, kind);
   // Read-only people cannot write the shared flag: they fold blocks for themselves only.
   const [localCollapsed, setLocalCollapsed] = useState<boolean | null>(null);
@@ -35,7 +35,7 @@ export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, 
   const blockMessages = messages.filter((m) => !m.field);
   const fieldErrors = messages.filter((m) => m.field && m.severity === "error").length;
 
-  const move = (delta: number) => moveBlock(doc, id, index + delta);
+  const move = (delta: number) => step(() => moveBlock(doc, id, index + delta));
   const onKeyDown = (event: KeyboardEvent<HTMLElement>) => {
     if (!canEdit || !event.altKey || (event.key !== "ArrowUp" && event.key !== "ArrowDown")) return;
     if ((event.target as HTMLElement).closest(".cm-editor")) return;
@@ -62,9 +62,9 @@ export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, 
         <div className="ml-auto">
           <BlockToolbar
             title={title} collapsed={collapsed} canEdit={canEdit} first={index === 0} last={index === count - 1}
-            onUp={() => move(-1)} onDown={() => move(1)} onDuplicate={() => duplicateBlock(doc, id)}
-            onToggle={() => (canEdit ? setBlockProp(doc, id, "collapsed", !collapsed) : setLocalCollapsed(!collapsed))}
-            onDelete={() => removeBlock(doc, id)}
+            onUp={() => move(-1)} onDown={() => move(1)} onDuplicate={() => step(() => duplicateBlock(doc, id))}
+            onToggle={() => (canEdit ? step(() => setBlockProp(doc, id, "collapsed", !collapsed)) : setLocalCollapsed(!collapsed))}
+            onDelete={() => step(() => removeBlock(doc, id))}
           />
         </div>
       </header>
@@ -80,11 +80,11 @@ export const BlockCard = memo(function BlockCard({ id, kind, map, index, count, 
 });
 
 function TitleInput({ id, title, canEdit }: { id: string; title: string; canEdit: boolean }) {
-  const { doc } = useNotebook();
+  const { doc, step } = useNotebook();
   const [draft, setDraft] = useState(title);
   useEffect(() => setDraft(title), [title]);
   if (!canEdit) return <h2 id={`block-${id}-title`} className="text-sm font-semibold">{title}</h2>;
-  const commit = () => { const t = draft.trim(); if (t && t !== title) setBlockProp(doc, id, "title", t); else setDraft(title); };
+  const commit = () => { const t = draft.trim(); if (t && t !== title) step(() => setBlockProp(doc, id, "title", t)); else setDraft(title); };
   return (
     <h2 id={`block-${id}-title`} className="min-w-0 flex-1 basis-40 text-sm font-semibold">
       <input

@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { useNotebook } from "./notebook-context";
 
 export function EmptyDocument({ canEdit, powertrain, name }: { canEdit: boolean; powertrain: PowertrainKind | null; name: string }) {
-  const { doc } = useNotebook();
+  const { doc, step } = useNotebook();
   const [choice, setChoice] = useState<PowertrainKind>(powertrain ?? "conventional");
   return (
     <div className="mb-gutter rounded-card border border-dashed border-rule-strong px-gutter py-section text-center">
@@ -17,7 +17,7 @@ export function EmptyDocument({ canEdit, powertrain, name }: { canEdit: boolean;
             className="rounded-control border border-rule-strong bg-paper-raised px-2 py-1.5 text-sm">
             {POWERTRAINS.map((p) => <option key={p} value={p}>{POWERTRAIN_LABELS[p]}</option>)}
           </select>
-          <Button onClick={() => createScenarioDoc(choice, name || "Untitled scenario", doc)}>Start from the template</Button>
+          <Button onClick={() => step(() => createScenarioDoc(choice, name || "Untitled scenario", doc))}>Start from the template</Button>
         </div>
       ) : <p className="mt-1 text-sm text-muted">An editor has not added any yet.</p>}
     </div>

@@ -70,7 +70,7 @@ function TextInput({ map, field, label, invalid, messagesId, blockId }: { map: B
 }
 
 function ChoiceInput({ id, blockId, map, field, label, invalid }: { id: string; blockId: string; map: BlockMap; field: ChoiceField; label: string; invalid: boolean }) {
-  const { doc, canEdit, focusBlock } = useNotebook();
+  const { doc, canEdit, focusBlock, step } = useNotebook();
   const text = useParamText(map, field.key);
   const current = (text?.toString() ?? field.default).trim();
   const known = field.options.some((o) => o.value === current);
@@ -82,7 +82,7 @@ function ChoiceInput({ id, blockId, map, field, label, invalid }: { id: string; 
       disabled={!canEdit}
       aria-invalid={invalid || undefined}
       onFocus={() => focusBlock(blockId)}
-      onChange={(event) => setParam(doc, blockId, field.key, event.target.value)}
+      onChange={(event) => { const v = event.target.value; step(() => setParam(doc, blockId, field.key, v)); }}
       className={"w-full rounded-control border bg-paper-raised px-3 py-1.5 text-sm text-ink disabled:bg-paper-sunk/50 " + (invalid ? "border-danger" : "border-rule-strong")}
     >
       {known ? null : <option value={current}>{current || "(none)"}</option>}

@@ -15,6 +15,8 @@ export interface NotebookContextValue {
   canEdit: boolean;
   blocks: BlockRef[];
   focusBlock: (blockId: string) => void;
+  /** runs a structural change (add, move, delete, …) as its own undo step */
+  step: (change: () => void) => void;
 }
 
 export const NotebookContext = createContext<NotebookContextValue | null>(null);

@@ -50,6 +50,12 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
   const peers = usePeers(awareness);
   useSummaryUpload({ doc, enabled: canEdit, workspaceId, documentId, result: evaluation.result, stale: evaluation.stale, stored: storedSummary });
   const focusBlock = useCallback((id: string) => setFocusedBlock(awareness, id), [awareness]);
+  // Typing merges within the capture window; a command is always one step of its own.
+  const step = useCallback((change: () => void) => {
+    undo.manager.stopCapturing();
+    change();
+    undo.manager.stopCapturing();
+  }, [undo.manager]);
 
   // Per-block props keep their identity while unchanged, so a recalculation or a cursor move
   // re-renders only the blocks it concerns (and the result views).
@@ -70,8 +76,8 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
   const valuesByBlock = useStableEntries(useMemo(() => new Map(Object.entries(evaluation.values)), [evaluation.values]));
 
   const context: NotebookContextValue = useMemo(
-    () => ({ doc, awareness, undoManager: undo.manager, canEdit, blocks, focusBlock }),
-    [doc, awareness, undo.manager, canEdit, blocks, focusBlock],
+    () => ({ doc, awareness, undoManager: undo.manager, canEdit, blocks, focusBlock, step }),
+    [doc, awareness, undo.manager, canEdit, blocks, focusBlock, step],
   );
   const name = meta.name || fallbackName;
   const powertrain = meta.powertrain ?? fallbackPowertrain;
@@ -82,7 +88,7 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
       <div className="sticky top-0 z-10 -mx-gutter mb-gutter border-b border-rule bg-paper/95 px-gutter py-3 backdrop-blur">
         <div className="flex flex-wrap items-center gap-x-4 gap-y-2">
           <h1 className="text-xl font-semibold" data-document-name>{name || "Untitled scenario"}</h1>
-          <PowertrainControl value={powertrain} canEdit={canEdit} onChange={(p) => setMeta(doc, { powertrain: p })} />
+          <PowertrainControl value={powertrain} canEdit={canEdit} onChange={(p) => step(() => setMeta(doc, { powertrain: p }))} />
           <ConnectionBadge state={collab.connection} unsynced={collab.unsynced} />
           {evaluation.pending ? <span className="text-xs text-muted" aria-live="polite">calculating…</span> : null}
           <div className="ml-auto flex items-center gap-2">

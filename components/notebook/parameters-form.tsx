@@ -24,7 +24,7 @@ export function ParametersForm({ blockId, map, messages }: { blockId: string; ma
 }
 
 function ParameterRow({ blockId, map, name, messages }: { blockId: string; map: BlockMap; name: string; messages: CompileMessage[] }) {
-  const { awareness, undoManager, canEdit, focusBlock, doc } = useNotebook();
+  const { awareness, undoManager, canEdit, focusBlock, doc, step } = useNotebook();
   const evaluation = useEvaluationState();
   const text = useParamText(map, name);
   const id = useId();
@@ -42,7 +42,7 @@ function ParameterRow({ blockId, map, name, messages }: { blockId: string; map: 
         <FieldMessages id={`${id}-m`} messages={messages} text={text?.toString() ?? ""} />
       </div>
       {canEdit ? (
-        <button type="button" onClick={() => removeParam(doc, blockId, name)} className="rounded-control px-2 py-1.5 text-sm text-danger hover:bg-danger-soft">
+        <button type="button" onClick={() => step(() => removeParam(doc, blockId, name))} className="rounded-control px-2 py-1.5 text-sm text-danger hover:bg-danger-soft">
           Remove<span className="sr-only"> parameter {name}</span>
         </button>
       ) : <span />}
@@ -51,7 +51,7 @@ function ParameterRow({ blockId, map, name, messages }: { blockId: string; map: 
 }
 
 function AddParameter({ blockId, existing }: { blockId: string; existing: string[] }) {
-  const { doc, focusBlock } = useNotebook();
+  const { doc, focusBlock, step } = useNotebook();
   const [name, setName] = useState("");
   const [error, setError] = useState<string | null>(null);
   const id = useId();
@@ -60,7 +60,7 @@ function AddParameter({ blockId, existing }: { blockId: string; existing: string
     const check = validParameterName(trimmed);
     if (check) return setError(check);
     if (existing.includes(trimmed)) return setError(`"${trimmed}" is already defined in this block`);
-    setParam(doc, blockId, trimmed, "");
+    step(() => setParam(doc, blockId, trimmed, ""));
     setName("");
     setError(null);
   };

@@ -68,6 +68,7 @@ async function openDocument(page: Page, path: string): Promise<void> {
 
 describe("notebook: two people in one document", () => {
   let a: Person, b: Person, reviewer: Person;
+  let shared: { path: string } | null = null;
   let watches: ConsoleWatch[] = [];
   beforeAll(async () => {
     [a, b, reviewer] = await Promise.all([openPerson(), openPerson(), openPerson()]);
@@ -156,6 +157,39 @@ describe("notebook: two people in one document", () => {
     await a.page.locator('[data-connection="connected"]:not([data-unsynced])').waitFor({ timeout: 20_000 });
     await expect.poll(() => massText(b.page), { timeout: 20_000 }).toBe("2000 kg");
 
+    for (const w of watches) expect(w.take()).toEqual([]);
+    shared = { path };
+  });
+
+  test("blocks: add, move, duplicate, collapse and delete reach the other editor; undo puts them back", async () => {
+    expect(shared).not.toBeNull();
+    const kinds = (page: Page) => page.locator("[data-block-kind]").evaluateAll((els) => els.map((e) => e.getAttribute("data-block-kind")));
+    const start = await kinds(b.page);
+
+    // Add an energy-flow view at the end: both see it, with its chart.
+    await a.page.getByRole("button", { name: "+ Add block" }).first().click();
+    await a.page.getByRole("menuitem", { name: "Energy flow" }).click();
+    await expect.poll(() => kinds(b.page), { timeout: 10_000 }).toEqual([...start, "energy_flow"]);
+    await b.page.locator('[data-block-kind="energy_flow"] canvas').waitFor();
+
+    // Move it up one place with the keyboard (Alt+↑ on the block), then duplicate the copy's neighbour.
+    await a.page.locator('[data-block-kind="energy_flow"]').focus();
+    await a.page.keyboard.press("Alt+ArrowUp");
+    const moved = [...start.slice(0, -1), "energy_flow", start[start.length - 1]];
+    await expect.poll(() => kinds(b.page), { timeout: 10_000 }).toEqual(moved);
+    await a.page.getByRole("button", { name: "Duplicate Energy flow", exact: true }).click();
+    await expect.poll(() => kinds(b.page).then((k) => k.filter((x) => x === "energy_flow").length), { timeout: 10_000 }).toBe(2);
+
+    // Collapse is shared for editors; delete removes the copy for everyone.
+    await a.page.getByRole("button", { name: "Collapse Energy flow (copy)" }).click();
+    await expect.poll(() => b.page.locator('[data-block-kind="energy_flow"]').nth(1).locator("canvas").count(), { timeout: 10_000 }).toBe(0);
+    await a.page.getByRole("button", { name: "Delete Energy flow (copy)" }).click();
+    await expect.poll(() => kinds(b.page), { timeout: 10_000 }).toEqual(moved);
+    await pageShot(b.page, "nb5-editor-b-after-block-edits");
+
+    // Undo (outside the editors) four times: delete, collapse, duplicate, move → energy flow back at the end.
+    for (let i = 0; i < 4; i++) await a.page.getByRole("button", { name: "Undo", exact: true }).click();
+    await expect.poll(() => kinds(b.page), { timeout: 10_000 }).toEqual([...start, "energy_flow"]);
     for (const w of watches) expect(w.take()).toEqual([]);
   });
 });
