@@ -10,6 +10,7 @@ import * as jobRoute from "@/app/api/evaluate/jobs/[id]/route";
 import * as workspaceRoute from "@/app/api/workspaces/[workspaceId]/route";
 import * as membersRoute from "@/app/api/workspaces/[workspaceId]/members/route";
 import * as libraryRoute from "@/app/api/workspaces/[workspaceId]/library/route";
+import * as documentsRoute from "@/app/api/workspaces/[workspaceId]/documents/route";
 import * as invitationsRoute from "@/app/api/workspaces/[workspaceId]/invitations/route";
 import * as memberRoute from "@/app/api/workspaces/[workspaceId]/members/[userId]/route";
 import { eq } from "drizzle-orm";
@@ -89,6 +90,8 @@ describe("personal API tokens", () => {
     expect((await bodyOf(ok)).role).toBe("viewer"); // capped to the token's role, though the user owns A
     const other = await readWorkspace(body.token, b);
     expect(other.status).toBe(404);
+    const docs = await call(documentsRoute.GET, "GET", `/api/workspaces/${a}/documents`, { headers: bearer(body.token), params: { workspaceId: a } });
+    expect(docs.status).toBe(200);
     const library = await call(libraryRoute.GET, "GET", `/api/workspaces/${a}/library`, { headers: bearer(body.token), params: { workspaceId: a } });
     expect(library.status).toBe(200);
     const upload = await call(libraryRoute.POST, "POST", `/api/workspaces/${a}/library`, { body: { kind: "cycle", text: "0\n1\n" }, headers: bearer(body.token), params: { workspaceId: a }, origin: null });
