@@ -13,6 +13,7 @@ const groupColor = {
 export const LEDGER_BAR_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: { type: "fit-x", contains: "padding" },
   width: "container",
   height: { step: 18 },
   data: { name: "ledger" },
@@ -33,6 +34,7 @@ export const LEDGER_BAR_SPEC = {
 export const ENERGY_FLOW_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: { type: "fit-x", contains: "padding" },
   width: "container",
   height: 320,
   data: { name: "flow" },
@@ -49,7 +51,8 @@ export const ENERGY_FLOW_SPEC = {
     {
       mark: { type: "bar", stroke: "#fcfaf5", strokeWidth: 1 },
       encoding: {
-        color: groupColor,
+        // The legend is drawn in HTML under the chart (components/charts/group-legend.tsx).
+        color: { ...groupColor, legend: null },
         tooltip: [{ field: "label", title: "term" }, { field: "kwh", title: "kWh", format: ".3f" }, { field: "share", title: "share", format: ".1%" }],
       },
     },
@@ -107,6 +110,7 @@ export function tracesSpec(panels: readonly TracePanel[], legendSeries: readonly
 export const OPERATING_POINTS_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: { type: "fit-x", contains: "padding" },
   width: "container",
   height: 280,
   layer: [

@@ -7,6 +7,7 @@ import { flowRows, fullLoadCurve, operatingPoints, tracePanels } from "@/lib/cli
 import { Chart } from "@/components/charts/chart";
 import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, tracesSpec } from "@/components/charts/specs";
 import { WithResult } from "./result-state";
+import { GroupLegend } from "@/components/charts/group-legend";
 import { useEvaluationState } from "./notebook-context";
 import { StrategyComparisonRunner } from "@/components/strategy";
 
@@ -20,6 +21,7 @@ function FlowBody({ result }: { result: Result }) {
     <>
       <p className="mb-2 text-sm text-muted">Energy in (left) and where it went (right), kWh over the cycle; equal heights are the ledger closing.</p>
       <Chart spec={ENERGY_FLOW_SPEC} datasets={datasets} label="Energy flow from sources to road work and losses" />
+      <GroupLegend groups={Array.from(new Set(datasets.flow.map((r) => r.group)))} />
     </>
   );
 }

@@ -190,6 +190,19 @@ describe("notebook: two people in one document", () => {
     // Undo (outside the editors) four times: delete, collapse, duplicate, move → energy flow back at the end.
     for (let i = 0; i < 4; i++) await a.page.getByRole("button", { name: "Undo", exact: true }).click();
     await expect.poll(() => kinds(b.page), { timeout: 10_000 }).toEqual([...start, "energy_flow"]);
+
+    // A formula error shows under the field, for everyone, with the character it concerns; the
+    // figures stay on the last valid result, marked as such.
+    await massField(a.page).click();
+    await a.page.keyboard.press("Control+A");
+    await a.page.keyboard.insertText("curb_mass + (2");
+    const error = b.page.locator('[data-block-kind="body"] [data-field="mass"] [role="alert"]');
+    await expect.poll(() => error.innerText(), { timeout: 10_000 }).toContain("Missing )");
+    expect(await error.innerText()).toContain("at character 15");
+    await b.page.getByText("Showing the last valid result").first().waitFor();
+    await blockShot(b.page, "body", "nb6-editor-b-formula-error");
+    await a.page.keyboard.press("Control+Z");
+    await expect.poll(() => error.count(), { timeout: 10_000 }).toBe(0);
     for (const w of watches) expect(w.take()).toEqual([]);
   });
 });
