@@ -22,7 +22,7 @@ export NODE_ENV=production
 node --import tsx scripts/migrate.ts
 node --import tsx scripts/seed.ts
 
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app lib db components -newer .next/BUILD_ID -type f 2>/dev/null | head -n 1)" ]; then
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app lib db components proxy.ts next.config.ts tailwind.config.ts postcss.config.mjs package-lock.json -newer .next/BUILD_ID -type f 2>/dev/null | head -n 1)" ]; then
   log "building the app (next build)"
   node node_modules/next/dist/bin/next build >"$ROOT/.data/build.log" 2>&1 || { tail -n 40 "$ROOT/.data/build.log"; die "next build failed (log: .data/build.log)"; }
 fi
