@@ -2,13 +2,14 @@
 // (no container to measure on the server). Ours in design; no spec ever comes from a request.
 import type { Config, TopLevelSpec } from "vega-lite";
 import { SINK_KEYS, type Result } from "@/lib/engine";
+import { EXPORT_FONT_FAMILY } from "./fonts";
 import { ELECTRIC, FUEL, INK, LOSS, MUTED, ROAD, RULE } from "@/components/charts/theme";
 
 export const EXPORT_CHARTS = ["speed", "power", "soc", "ledger"] as const;
 export type ExportChart = (typeof EXPORT_CHARTS)[number];
 
-/** Shipped fonts are woff2, which the PNG rasteriser cannot read; DejaVu Sans is a system font on these machines. */
-const FONT = "DejaVu Sans, Inter, Helvetica, Arial, sans-serif";
+/** Inter first: the PNG rasteriser has exactly that font (lib/export/fonts.ts); an SVG opened elsewhere falls back. */
+const FONT = `${EXPORT_FONT_FAMILY}, Helvetica, Arial, sans-serif`;
 const CONFIG: Config = {
   background: "#fcfaf5",
   font: FONT,

@@ -4,6 +4,7 @@ import { describe, expect, it } from "vitest";
 import { evaluateScenarioInput, SINK_KEYS, type Result } from "@/lib/engine";
 import { tracesCsv } from "@/lib/export/traces-csv";
 import { chartSpec } from "@/lib/export/charts";
+import { Resvg } from "@resvg/resvg-js";
 import { renderSvg, svgToPng } from "@/lib/export/render";
 import { reviewSummaryHtml, CAUTIONS } from "@/lib/export/review-summary";
 import { exportBundle } from "@/lib/export/bundle";
@@ -49,6 +50,20 @@ describe("exports", () => {
     expect([...png.slice(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
     const ihdrWidth = new DataView(png.buffer, png.byteOffset).getUint32(16);
     expect(ihdrWidth).toBe(Math.round(width * 2));
+  });
+
+  it("PNG text is drawn with the shipped Inter, without any system font", async () => {
+    const svg = await renderSvg(chartSpec("speed", result));
+    // vega's SVG writes every label, axis title and chart title as a <text> element
+    const withoutText = svg.replace(/<text\b[^>]*>[\s\S]*?<\/text>/g, "");
+    expect(withoutText.length).toBeLessThan(svg.length);
+    expect(svg).toContain('font-family="Inter,');
+    const same = (a: Uint8Array, b: Uint8Array) => Buffer.compare(Buffer.from(a), Buffer.from(b)) === 0;
+    // svgToPng loads no system fonts, so any drawn glyph comes from the packaged TTFs
+    expect(same(svgToPng(svg, 1), svgToPng(withoutText, 1))).toBe(false);
+    // Control (the check above can fail): with no font at all resvg drops text, and both PNGs match.
+    const bare = (s: string) => new Uint8Array(new Resvg(s, { font: { loadSystemFonts: false } }).render().asPng());
+    expect(same(bare(svg), bare(withoutText))).toBe(true);
   });
 
   it("the ledger chart has one bar per non-zero loss term", async () => {
