@@ -85,6 +85,27 @@ describe("documents table", () => {
     await page.getByRole("button", { name: /^Name/ }).click();
     await expect.poll(() => page.locator("th[aria-sort]").first().getAttribute("aria-sort")).toBe("ascending");
 
+    // Workspace overview: the same number of documents as the list (archived ones left out), the
+    // renamed document among the recently updated with its headline figure, the archived copy not.
+    await gotoApp(page, `/w/${workspaceId}/documents`); // fresh: default query, no previous rows kept
+    await row(page, renamed).waitFor();
+    const listed = await page.locator("[data-document-row]").count();
+    expect(listed).toBeGreaterThan(0);
+    await gotoApp(page, `/w/${workspaceId}`);
+    const overview = page.getByTestId("overview-documents");
+    await overview.waitFor();
+    expect(Number(await overview.getByTestId("document-count").innerText())).toBe(listed);
+    expect(await page.getByText("No documents in this workspace yet").count()).toBe(0);
+    const recent = page.getByRole("list", { name: "Recently updated documents" }).getByRole("listitem");
+    expect(await recent.count()).toBe(Math.min(5, listed));
+    const mine = recent.filter({ has: page.getByRole("link", { name: renamed, exact: true }) });
+    expect(await mine.innerText()).toMatch(/series hybrid[\s\S]*\d+\.\d\d L\/100 km/);
+    expect(await recent.filter({ hasText: copy }).count()).toBe(0);
+    await screenshot(page, "nd3b-workspace-overview");
+    await mine.getByRole("link", { name: renamed, exact: true }).click();
+    await page.waitForURL(/\/documents\/[0-9a-f-]{36}$/);
+    await page.locator("[data-document-name]").filter({ hasText: renamed }).waitFor();
+
     // Reviewer: the list, no create/rename/duplicate/archive.
     const rp = reviewer.page;
     await signIn(rp, email("reviewer"));

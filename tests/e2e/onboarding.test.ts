@@ -47,6 +47,9 @@ describe("onboarding: owner invites a reviewer", () => {
     const workspacePath = pathOf(page);
     await page.getByRole("heading", { level: 1, name: workspaceName }).waitFor();
     expect(await page.locator("main").innerText()).toContain("owner");
+    // A new workspace really has no documents: the overview says so (and shows no count).
+    await page.getByText("No documents in this workspace yet.").waitFor();
+    expect(await page.getByTestId("document-count").count()).toBe(0);
     await screenshot(page, "03-workspace-home-owner");
     expect(ownerConsole.take()).toEqual([]);
 

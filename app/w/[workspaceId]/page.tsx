@@ -7,13 +7,15 @@ import { Panel } from "@/components/ui/panel";
 import { PageTitle } from "@/components/ui/page-title";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { roleSummary } from "@/components/workspace/role-summary";
+import { loadOverviewDocuments } from "@/components/workspace/overview-data";
+import { RecentDocuments } from "@/components/workspace/recent-documents";
 
 export const metadata: Metadata = { title: "Workspace" };
 
 export default async function WorkspaceHome({ params }: { params: Promise<{ workspaceId: string }> }) {
   const { workspaceId } = await params;
   const { workspace } = await loadWorkspace(workspaceId);
-  const members = await listMembers({ workspaceId });
+  const [members, docs] = await Promise.all([listMembers({ workspaceId }), loadOverviewDocuments(workspaceId)]);
   const counts = countByRole(members.map((m) => m.role));
   return (
     <>
@@ -24,10 +26,7 @@ export default async function WorkspaceHome({ params }: { params: Promise<{ work
       </PageTitle>
       <div className="grid gap-gutter md:grid-cols-[2fr_1fr]">
         <Panel title="Documents">
-          <div className="rounded-control border border-dashed border-rule-strong px-gutter py-section text-center">
-            <p className="font-medium">No documents in this workspace yet.</p>
-            <p className="mt-1 text-sm text-muted">Scenario documents will be listed here.</p>
-          </div>
+          <RecentDocuments workspaceId={workspaceId} {...docs} />
         </Panel>
         <Panel
           title="Members"
