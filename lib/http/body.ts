@@ -9,10 +9,11 @@ export function isJsonContentType(value: string | null): boolean {
   return type === "application/json" || (type?.startsWith("application/") === true && type.endsWith("+json"));
 }
 
-export async function readLimitedText(request: Request, limitBytes: number): Promise<string> {
+/** The raw body bytes; 413 as soon as the declared or streamed size passes the limit. */
+export async function readLimitedBytes(request: Request, limitBytes: number): Promise<Uint8Array<ArrayBuffer>> {
   const declared = Number(request.headers.get("content-length") ?? "NaN");
   if (Number.isFinite(declared) && declared > limitBytes) throw new PayloadTooLarge(limitBytes);
-  if (!request.body) return "";
+  if (!request.body) return new Uint8Array();
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
@@ -26,7 +27,17 @@ export async function readLimitedText(request: Request, limitBytes: number): Pro
     }
     chunks.push(value);
   }
-  return new TextDecoder("utf-8").decode(Buffer.concat(chunks));
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const chunk of chunks) {
+    out.set(chunk, at);
+    at += chunk.byteLength;
+  }
+  return out;
+}
+
+export async function readLimitedText(request: Request, limitBytes: number): Promise<string> {
+  return new TextDecoder("utf-8").decode(await readLimitedBytes(request, limitBytes));
 }
 
 /** The parsed JSON body; 415 when it is not declared as JSON, 400 when it does not parse. */

@@ -2,36 +2,13 @@
 // `file` part (fields kind, confirmation as JSON text, name, source_note). Both end as the same
 // object; a file part keeps its raw bytes so that the encoding check sees them.
 import { MAX_UPLOAD_BYTES } from "@/lib/uploads";
-import { HttpError, PayloadTooLarge, UnsupportedMediaType } from "@/lib/http/errors";
-import { isJsonContentType, readJsonBody } from "@/lib/http/body";
+import { HttpError, UnsupportedMediaType } from "@/lib/http/errors";
+import { isJsonContentType, readJsonBody, readLimitedBytes } from "@/lib/http/body";
 
 /** Room for the JSON escaping of a file at the upload limit plus the other fields. */
 export const UPLOAD_REQUEST_LIMIT_BYTES = 2 * MAX_UPLOAD_BYTES + 64 * 1024;
 
 export type UploadRequest = { fields: Record<string, unknown>; bytes: Uint8Array | null };
-
-async function readLimitedBytes(request: Request, limit: number): Promise<Uint8Array<ArrayBuffer>> {
-  const declared = Number(request.headers.get("content-length") ?? "NaN");
-  if (Number.isFinite(declared) && declared > limit) throw new PayloadTooLarge(limit);
-  if (!request.body) return new Uint8Array();
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
-    if (total > limit) {
-      await reader.cancel().catch(() => {});
-      throw new PayloadTooLarge(limit);
-    }
-    chunks.push(value);
-  }
-  const out = new Uint8Array(total);
-  let at = 0;
-  for (const c of chunks) { out.set(c, at); at += c.byteLength; }
-  return out;
-}
 
 function parseJsonField(name: string, value: string): unknown {
   try {
