@@ -24,7 +24,9 @@ export interface NotebookClientProps {
 
 export function NotebookClient(props: NotebookClientProps) {
   const user = useMemo(() => makePresenceUser(props.user), [props.user]);
-  const collab = useCollab({ collabUrl: props.collabUrl, documentId: props.documentId, user });
+  // The document's own API route: same session and membership rules as the collaboration upgrade.
+  const accessUrl = `/api/workspaces/${encodeURIComponent(props.workspaceId)}/documents/${encodeURIComponent(props.documentId)}`;
+  const collab = useCollab({ collabUrl: props.collabUrl, documentId: props.documentId, accessUrl, user });
   if (!collab) return <p className="py-section text-center text-sm text-muted">Opening the document…</p>;
   return (
     <Notebook collab={collab} canEdit={props.canEdit} archived={props.archived} role={props.role} workspaceId={props.workspaceId} documentId={props.documentId}

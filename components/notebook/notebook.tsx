@@ -19,7 +19,7 @@ import { Button } from "@/components/ui/button";
 import { EvaluationContext, NotebookContext, type NotebookContextValue } from "./notebook-context";
 import { BlockCard } from "./block-card";
 import { AddBlockMenu } from "./add-block-menu";
-import { ConnectionBadge } from "./connection-badge";
+import { ConnectionBadge, ConnectionEnded, isEnded } from "./connection-badge";
 import { PresenceBar } from "./presence-bar";
 import { Cautions } from "./result-state";
 import { EmptyDocument } from "./empty-document";
@@ -103,6 +103,7 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
         </div>
         <div className="mt-2"><PresenceBar peers={peers} /></div>
       </div>
+      {isEnded(collab.connection) ? <ConnectionEnded state={collab.connection} /> : null}
       {canEdit ? null : (
         <p className="mb-gutter rounded-control bg-paper-sunk px-4 py-2.5 text-sm text-ink-soft" data-read-only>
           {archived
