@@ -206,3 +206,46 @@ describe("notebook: two people in one document", () => {
     for (const w of watches) expect(w.take()).toEqual([]);
   });
 });
+
+describe("notebook: the session ends while a document is open", () => {
+  let p: Person;
+  let watch: ConsoleWatch;
+  beforeAll(async () => {
+    p = await openPerson();
+    watch = new ConsoleWatch(p.page);
+  });
+  afterAll(async () => {
+    await p?.close();
+  });
+
+  test("signed out elsewhere: the next connection is refused, the notebook says so and stops retrying", async () => {
+    const page = p.page;
+    await signIn(page, email("editor"));
+    const { workspaceId, documentId } = await createDocument(page, `Session end ${Date.now().toString(36)}`);
+    await openDocument(page, `/w/${workspaceId}/documents/${documentId}`);
+    // Signed out from another tab of the same browser (same cookie jar).
+    const out = await page.request.post(appUrl("/api/auth/sign-out"), { headers: { origin: new URL(appUrl("/")).origin } });
+    expect(out.ok()).toBe(true);
+    // A network blip with an edit meanwhile makes the notebook reconnect; the collaboration server
+    // refuses the upgrade with 401 (server/collab/admission.ts), which the page learns from the app.
+    await p.context.setOffline(true);
+    await page.locator('[data-connection="offline"]').waitFor();
+    await massField(page).click();
+    await page.keyboard.press("Control+A");
+    await page.keyboard.insertText("1900 kg");
+    await p.context.setOffline(false);
+    await page.locator('[data-connection="session-ended"]').waitFor({ timeout: 20_000 });
+    const notice = page.getByRole("alert").filter({ hasText: "Your session ended — sign in again" });
+    await notice.waitFor();
+    expect(await notice.getByRole("link", { name: "Sign in" }).getAttribute("href")).toBe(`/sign-in?next=${encodeURIComponent(`/w/${workspaceId}/documents/${documentId}`)}`);
+    await pageShot(page, "nb9-session-ended");
+    // No reconnect loop: no new WebSocket while y-websocket's backoff (≤ 2.5 s) would have retried twice.
+    let attempts = 0;
+    page.on("websocket", () => attempts++);
+    await page.waitForTimeout(6000);
+    expect(attempts).toBe(0);
+    expect(await page.locator('[data-connection="session-ended"]').count()).toBe(1);
+    // Provoked on purpose: the refused upgrade and the app's answers while signed out are 401s.
+    expect(watch.take().filter((e) => !/\b401\b/.test(e))).toEqual([]);
+  });
+});

@@ -57,7 +57,10 @@ export function watchConnection(provider: WebsocketProvider, doc: Y.Doc, opts: W
   const end = (state: EndedState) => {
     if (ended) return;
     ended = state;
-    provider.disconnect(); // no further attempts (a server close already stopped them; a refusal did not)
+    // No further attempts (a server close already stopped them; a refusal did not). An attempt
+    // in flight is left to be refused: closing a connecting socket only adds a browser warning.
+    provider.shouldConnect = false;
+    if (provider.wsconnected) provider.disconnect();
     emit();
   };
   const probe = async () => {
