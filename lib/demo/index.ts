@@ -10,6 +10,7 @@ import { buildDieselVan } from "./diesel";
 import { buildParallelVan } from "./parallel";
 import { buildSeriesVan } from "./series";
 import type { DemoCycle } from "./van";
+import { withResultViews } from "./result-views";
 
 export type { DemoCycle } from "./van";
 export { DELIVERY_ROUTE, sampleRoute, routeSpeedsText, routeFigures, type Phase, type Section, type SampledRoute } from "./delivery-route";
@@ -36,7 +37,7 @@ const CYCLE_SUFFIX: Record<DemoCycle, string> = { route: "delivery route", nedc:
 export const DEMO_DOCUMENTS: readonly DemoDocument[] = (["route", "nedc"] as const).flatMap((cycle) =>
   ARCHITECTURES.map((a): DemoDocument => {
     const name = `${a.title} — ${CYCLE_SUFFIX[cycle]}`;
-    return { key: `${a.powertrain}-${cycle}`, name, powertrain: a.powertrain, cycle, build: () => a.build(cycle, name) };
+    return { key: `${a.powertrain}-${cycle}`, name, powertrain: a.powertrain, cycle, build: () => withResultViews(a.build(cycle, name), a.powertrain) };
   }),
 );
 

@@ -90,6 +90,25 @@ describe.each(DEMO_DOCUMENTS.map((d) => [d.name, d] as const))("%s", (_name, d) 
     expect(blocks.map((b) => b.note).join("\n")).toMatch(/invented for the demo/);
   });
 
+  it("shows the energy flow, and with an engine its operating points, right after the loss ledger", () => {
+    const kinds = run(d.key).blocks.map((b) => b.kind);
+    const ledger = kinds.indexOf("loss_ledger");
+    expect(ledger).toBeGreaterThan(kinds.indexOf("headline_figures"));
+    const hasEngine = run(d.key).scenario.engine !== undefined && run(d.key).scenario.engine !== null;
+    expect(hasEngine).toBe(d.powertrain !== "bev");
+    const expected = hasEngine ? ["loss_ledger", "energy_flow", "operating_points"] : ["loss_ledger", "energy_flow"];
+    expect(kinds.slice(ledger, ledger + expected.length)).toEqual(expected);
+    // each view once: a second copy would be a leftover of the template's own placement
+    expect(kinds.filter((k) => k === "energy_flow")).toHaveLength(1);
+    expect(kinds.filter((k) => k === "operating_points")).toHaveLength(hasEngine ? 1 : 0);
+    // the engine's points have something to show: steps with the engine on, under a full-load curve
+    if (hasEngine) {
+      const { result } = run(d.key);
+      expect(result.curves.engine_full_load?.speed_rpm.length ?? 0).toBeGreaterThan(1);
+      expect(result.traces.engine_on.some(Boolean)).toBe(true);
+    }
+  });
+
   if (d.powertrain === "conventional" || d.powertrain === "parallel" || d.powertrain === "series") {
     it("burns diesel with the reference values (REFERENCES.md: JEC v4a from memory; UNECE R101)", () => {
       const fuel = run(d.key).scenario.engine!.fuel;
