@@ -46,7 +46,7 @@ export function RecentDocuments(props: { workspaceId: string; total: number; rec
             </span>
             <span className="flex items-baseline gap-4">
               <span className="num">{headlineFigure(d.powertrain, d.summary)}</span>
-              <time dateTime={d.updatedAt.toISOString()} className="text-muted">{sinceText(d.updatedAt.toISOString(), now)}</time>
+              <time dateTime={d.updatedAt.toISOString()} className="w-20 text-right text-muted">{sinceText(d.updatedAt.toISOString(), now)}</time>
             </span>
           </li>
         ))}
