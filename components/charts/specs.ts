@@ -3,6 +3,13 @@
 import type { VisualizationSpec } from "vega-embed";
 import { CHART_CONFIG, ELECTRIC, FUEL, GROUP_DOMAIN, GROUP_RANGE, GROUP_TITLES, INK, LOSS, MUTED, ROAD } from "./theme";
 
+/**
+ * Width from the container; the layout is recalculated on every update (resize), because the
+ * data arrive after the embed: computed once, the axes would keep the room of the empty chart
+ * and clip labels that only the data bring (category names, longer tick labels).
+ */
+export const FIT_X = { type: "fit-x", contains: "padding", resize: true } as const;
+
 const groupColor = {
   field: "group", type: "nominal", title: null,
   scale: { domain: GROUP_DOMAIN, range: GROUP_RANGE },
@@ -13,7 +20,7 @@ const groupColor = {
 export const LEDGER_BAR_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
-  autosize: { type: "fit-x", contains: "padding" },
+  autosize: FIT_X,
   width: "container",
   height: { step: 18 },
   data: { name: "ledger" },
@@ -34,7 +41,7 @@ export const LEDGER_BAR_SPEC = {
 export const ENERGY_FLOW_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
-  autosize: { type: "fit-x", contains: "padding" },
+  autosize: FIT_X,
   width: "container",
   height: 320,
   data: { name: "flow" },
@@ -67,42 +74,51 @@ export const ENERGY_FLOW_SPEC = {
   ],
 } as VisualizationSpec;
 
-const seriesColor = {
-  field: "series", type: "nominal", title: null,
-  scale: { domain: ["speed", "engine", "motor", "generator", "friction brakes", "SOC", "gear"], range: [INK, FUEL, ELECTRIC, ROAD, LOSS, ELECTRIC, MUTED] },
-  legend: { orient: "bottom", direction: "horizontal" },
-} as const;
-
-export interface TracePanel {
-  /** dataset name */
-  id: string;
-  title: string;
-}
+/** Colours of the trace series; the key is drawn in HTML under each multi-series panel. */
+export const SERIES_DOMAIN = ["speed", "engine", "motor", "generator", "friction brakes", "SOC", "gear"];
+export const SERIES_RANGE = [INK, FUEL, ELECTRIC, ROAD, LOSS, ELECTRIC, MUTED];
 
 /**
- * Traces: small multiples over time, one panel per quantity, stacked with aligned time axes.
- * A vconcat (not a facet) so that the layout never depends on the data pushed later; the panel
- * list depends only on the powertrain, so the spec changes only when the powertrain does.
+ * Time axis of every chart over a cycle: the data's extent (nice: false, so a 2,231 s cycle does
+ * not run to 2,400 s), labels with a plain comma for thousands like the rest of the product, and
+ * the outermost labels kept inside the plot so neighbours never run together.
  */
-export function tracesSpec(panels: readonly TracePanel[], legendSeries: readonly string[]): VisualizationSpec {
+export const TIME_AXIS = { format: ",~f", labelFlush: true, labelOverlap: true } as const;
+export const TIME_SCALE = { nice: false, zero: false } as const;
+
+/**
+ * Fixed width of the y axis (ticks + labels) of the trace panels, so the time axes of the
+ * stacked panels line up although their tick labels differ in length.
+ */
+const TRACE_Y_AXIS_PX = 44;
+
+export type TracePanelKind = "speed" | "power" | "soc" | "gear";
+
+/**
+ * One trace panel: a single view (so fit-x autosize can keep its y axis inside the figure).
+ * Title and colour key are HTML around it (components/notebook/chart-views.tsx); the panels
+ * stack with aligned time axes because their y axes have the same fixed width. Constant per
+ * kind, fed through the dataset "rows".
+ */
+export function tracePanelSpec(kind: TracePanelKind, timeLabels: boolean): VisualizationSpec {
+  const gear = kind === "gear";
   return {
     $schema: "https://vega.github.io/schema/vega-lite/v6.json",
     config: CHART_CONFIG,
-    autosize: { type: "fit-x", contains: "padding" },
-    spacing: 14,
-    resolve: { scale: { color: "shared", x: "shared" } },
-    vconcat: panels.map((p, i) => ({
-      data: { name: p.id },
-      width: "container",
-      height: 90,
-      title: { text: p.title, anchor: "start", fontSize: 11, fontWeight: 600, color: INK, offset: 4 },
-      mark: { type: "line", strokeWidth: 1.2, interpolate: p.id === "trace_gear" ? "step-after" : "linear" },
-      encoding: {
-        x: { field: "t", type: "quantitative", title: i === panels.length - 1 ? "time (s)" : null, axis: { labels: i === panels.length - 1 } },
-        y: { field: "value", type: "quantitative", title: null, axis: { tickCount: 4 }, scale: { zero: p.id !== "trace_soc" } },
-        color: { ...seriesColor, legend: { ...seriesColor.legend, values: legendSeries } },
+    autosize: FIT_X,
+    width: "container",
+    height: 90,
+    data: { name: "rows" },
+    mark: { type: "line", strokeWidth: 1.2, interpolate: gear ? "step-after" : "linear" },
+    encoding: {
+      x: { field: "t", type: "quantitative", title: timeLabels ? "time (s)" : null, scale: TIME_SCALE, axis: { ...TIME_AXIS, labels: timeLabels, ticks: timeLabels } },
+      y: {
+        field: "value", type: "quantitative", title: null, scale: { zero: kind !== "soc" },
+        axis: { tickCount: gear ? undefined : 4, tickMinStep: gear ? 1 : undefined, format: gear ? "d" : ",~f", minExtent: TRACE_Y_AXIS_PX, maxExtent: TRACE_Y_AXIS_PX },
       },
-    })),
+      color: { field: "series", type: "nominal", scale: { domain: SERIES_DOMAIN, range: SERIES_RANGE }, legend: null },
+      tooltip: [{ field: "series" }, { field: "t", title: "t (s)", format: "," }, { field: "value", format: ".2f" }],
+    },
   } as VisualizationSpec;
 }
 
@@ -110,7 +126,7 @@ export function tracesSpec(panels: readonly TracePanel[], legendSeries: readonly
 export const OPERATING_POINTS_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
-  autosize: { type: "fit-x", contains: "padding" },
+  autosize: FIT_X,
   width: "container",
   height: 280,
   layer: [

@@ -10,7 +10,10 @@ export type Datasets = Record<string, readonly object[]>;
 
 // logLevel 1 = errors only: vega warns about empty extents before the first data arrives.
 // Canvas: a recalculation redraws thousands of trace points, which SVG does markedly slower.
-const OPTIONS: EmbedOptions = { actions: false, renderer: "canvas", logLevel: 1 };
+// Number format stated, not inherited: thousands with a plain comma and a dot for decimals, as
+// in the rest of the product (tables use en-GB), whatever locale the browser runs in.
+const FORMAT_LOCALE = { decimal: ".", thousands: ",", grouping: [3], currency: ["", ""], minus: "\u2212" };
+const OPTIONS: EmbedOptions = { actions: false, renderer: "canvas", logLevel: 1, formatLocale: FORMAT_LOCALE };
 
 export default function VegaView({ spec, datasets, label }: { spec: VisualizationSpec; datasets: Datasets; label: string }) {
   const [view, setView] = useState<EmbedResult["view"] | null>(null);

@@ -3,9 +3,10 @@
 // placeholder for documents that already carry that block.
 import { useMemo } from "react";
 import type { Result } from "@/lib/engine";
-import { flowRows, fullLoadCurve, operatingPoints, tracePanels } from "@/lib/client/notebook/chart-data";
+import { flowRows, fullLoadCurve, operatingPoints, tracePanels, type TracePanelData } from "@/lib/client/notebook/chart-data";
 import { Chart } from "@/components/charts/chart";
-import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, tracesSpec } from "@/components/charts/specs";
+import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, SERIES_DOMAIN, SERIES_RANGE, tracePanelSpec } from "@/components/charts/specs";
+import { ColorKey } from "@/components/charts/color-key";
 import { WithResult } from "./result-state";
 import { GroupLegend } from "@/components/charts/group-legend";
 import { useEvaluationState } from "./notebook-context";
@@ -30,19 +31,31 @@ export function Traces() {
   return <WithResult>{(r) => <TracesBody result={r} />}</WithResult>;
 }
 
+/**
+ * Small multiples, one chart per quantity, stacked: each panel has its title and (for more than
+ * one series) its colour key in HTML, so neither can be clipped by the chart's own layout.
+ */
 function TracesBody({ result }: { result: Result }) {
   const panels = useMemo(() => tracePanels(result), [result]);
-  const layout = panels.map((p) => `${p.id}:${p.title}`).join("|");
-  // The spec follows the list of panels only (i.e. the powertrain), never the values.
-  // eslint-disable-next-line react-hooks/exhaustive-deps
-  const spec = useMemo(() => tracesSpec(panels.map(({ id, title }) => ({ id, title })), powerSeries(result.powertrain)), [layout]);
-  const datasets = useMemo(() => Object.fromEntries(panels.map((p) => [p.id, p.rows])), [panels]);
-  return <Chart key={layout} spec={spec} datasets={datasets} label="Traces over the cycle: speed, power split, SOC, gear" />;
+  return (
+    <div className="space-y-3" role="group" aria-label="Traces over the cycle: speed, power split, SOC, gear">
+      {panels.map((p, i) => <TracePanel key={p.id} panel={p} last={i === panels.length - 1} />)}
+    </div>
+  );
 }
 
-/** The series of the power-split panel (the only panel with more than one line). */
-function powerSeries(pt: Result["powertrain"]): string[] {
-  return [...(pt !== "bev" ? ["engine"] : []), ...(pt !== "conventional" ? ["motor"] : []), ...(pt === "series" ? ["generator"] : []), "friction brakes"];
+function TracePanel({ panel, last }: { panel: TracePanelData; last: boolean }) {
+  // The spec follows the panel kind and position only, never the values.
+  const spec = useMemo(() => tracePanelSpec(panel.kind, last), [panel.kind, last]);
+  const datasets = useMemo(() => ({ rows: panel.rows }), [panel.rows]);
+  const key = useMemo(() => panel.series.map((s) => ({ label: s, color: SERIES_RANGE[SERIES_DOMAIN.indexOf(s)] ?? "currentColor" })), [panel.series]);
+  return (
+    <section data-trace={panel.kind}>
+      <h4 className="text-xs font-semibold text-ink">{panel.title}</h4>
+      <Chart spec={spec} datasets={datasets} label={`${panel.title} over the cycle`} />
+      {panel.series.length > 1 ? <ColorKey items={key} label={`Colour key: ${panel.title}`} /> : null}
+    </section>
+  );
 }
 
 export function OperatingPoints() {

@@ -2,12 +2,14 @@
 // Constants, fed through named datasets; ours in design.
 import type { VisualizationSpec } from "vega-embed";
 import { CHART_CONFIG, ELECTRIC, FUEL, INK, LOSS } from "@/components/charts/theme";
+import { FIT_X, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
 
 const OK = "#2e6b45";
 
 export const WATERFALL_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: FIT_X,
   width: "container",
   height: 260,
   data: { name: "steps" },
@@ -34,12 +36,13 @@ export const WATERFALL_SPEC = {
 export const OVERLAY_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: FIT_X,
   width: "container",
   height: 200,
   data: { name: "points" },
   mark: { type: "line", strokeWidth: 1.4, interpolate: "step-after" },
   encoding: {
-    x: { field: "time_s", type: "quantitative", title: "time, s" },
+    x: { field: "time_s", type: "quantitative", title: "time (s)", scale: TIME_SCALE, axis: TIME_AXIS },
     y: { field: "value", type: "quantitative", title: null },
     color: { field: "side", type: "nominal", title: null, scale: { domain: ["A", "B"], range: [ELECTRIC, FUEL] }, legend: { orient: "top", labelExpr: "datum.value === 'A' ? 'A (from)' : 'B (to)'" } },
     strokeDash: { field: "side", type: "nominal", scale: { domain: ["A", "B"], range: [[1, 0], [5, 3]] }, legend: null },

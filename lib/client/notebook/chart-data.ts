@@ -113,11 +113,14 @@ export const TRACE_BUDGET = 1500;
 
 export interface TracePanelData {
   id: string;
+  kind: "speed" | "power" | "soc" | "gear";
   title: string;
+  /** the series drawn, in legend order (a key is shown when there is more than one) */
+  series: string[];
   rows: TraceRow[];
 }
 
-/** Small multiples: speed, power split (engine, motor, generator, friction brakes), SOC (%), gear. */
+/** Small multiples: speed, power split (engine, motor, generator, friction brakes), SOC (%), gear (with more than one). */
 export function tracePanels(result: Result): TracePanelData[] {
   const tr = result.traces;
   const idx = thin(tr.time_s.length, TRACE_BUDGET);
@@ -132,17 +135,20 @@ export function tracePanels(result: Result): TracePanelData[] {
     return out;
   };
   const pt = result.powertrain;
-  const power: TraceRow[] = [];
-  if (pt !== "bev") power.push(...series("engine", tr.engine_power_w, 1e-3));
-  if (pt !== "conventional") power.push(...series("motor", tr.motor_power_w, 1e-3));
-  if (pt === "series") power.push(...series("generator", tr.generator_power_w, 1e-3));
-  power.push(...series("friction brakes", tr.brake_power_w, -1e-3));
+  const powerSources: [string, readonly number[] | undefined, number][] = [];
+  if (pt !== "bev") powerSources.push(["engine", tr.engine_power_w, 1e-3]);
+  if (pt !== "conventional") powerSources.push(["motor", tr.motor_power_w, 1e-3]);
+  if (pt === "series") powerSources.push(["generator", tr.generator_power_w, 1e-3]);
+  powerSources.push(["friction brakes", tr.brake_power_w, -1e-3]);
+  const power = powerSources.flatMap(([name, values, scale]) => series(name, values, scale));
   const panels: TracePanelData[] = [
-    { id: "trace_speed", title: "Speed (km/h)", rows: series("speed", tr.speed_kmh) },
-    { id: "trace_power", title: "Power split (kW; brakes negative)", rows: power },
+    { id: "trace_speed", kind: "speed", title: "Speed (km/h)", series: ["speed"], rows: series("speed", tr.speed_kmh) },
+    { id: "trace_power", kind: "power", title: "Power split (kW; brakes negative)", series: powerSources.map(([name]) => name), rows: power },
   ];
-  if (pt !== "conventional") panels.push({ id: "trace_soc", title: "SOC (%)", rows: series("SOC", tr.soc, 100) });
-  panels.push({ id: "trace_gear", title: "Gear", rows: series("gear", tr.gear) });
+  if (pt !== "conventional") panels.push({ id: "trace_soc", kind: "soc", title: "SOC (%)", series: ["SOC"], rows: series("SOC", tr.soc, 100) });
+  // A single fixed reduction has nothing to show but "1 when moving": no gear panel then.
+  const gears = series("gear", tr.gear);
+  if (gears.some((r) => r.value > 1)) panels.push({ id: "trace_gear", kind: "gear", title: "Gear", series: ["gear"], rows: gears });
   return panels;
 }
 

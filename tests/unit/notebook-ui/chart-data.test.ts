@@ -40,6 +40,19 @@ describe.each(POWERTRAINS)("chart rows for the %s template", (powertrain) => {
     expect(panels[0]!.rows.length).toBeLessThanOrEqual(TRACE_BUDGET);
   });
 
+  test("each trace panel lists exactly the series it draws (the colour key under the panel)", () => {
+    for (const p of tracePanels(result)) {
+      expect(new Set(p.rows.map((r) => r.series))).toEqual(new Set(p.series));
+      expect(p.id).toBe(`trace_${p.kind}`);
+    }
+    // the BEV and series templates have one fixed reduction: no gear panel (lib/notebook/templates.ts)
+    expect(tracePanels(result).some((p) => p.kind === "gear")).toBe(powertrain === "conventional" || powertrain === "parallel");
+    const power = tracePanels(result).find((p) => p.kind === "power")!;
+    // engine / motor / generator by architecture (docs/notebook-ui.md), friction brakes always
+    const expected = { conventional: ["engine"], parallel: ["engine", "motor"], series: ["engine", "motor", "generator"], bev: ["motor"] }[powertrain];
+    expect(power.series).toEqual([...expected, "friction brakes"]);
+  });
+
   test("operating points only with the engine on, never for the battery-electric car", () => {
     const pts = operatingPoints(result);
     if (powertrain === "bev") expect(pts).toEqual([]);
