@@ -1,4 +1,17 @@
 import type { Comparison } from "@/lib/engine/strategies/compare";
+import { INK, LOSS, MUTED } from "@/components/charts/theme";
+
+/** Line colours of the strategies in the SOC chart, in the comparison's order (rule, ECMS, DP). */
+export const SOC_COLORS = [MUTED, LOSS, INK];
+
+const fixed = (x: number, digits: number) => x.toLocaleString("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** "+1.2", "\u22120.4", and "0.0" for anything that rounds to zero (never "\u22120.0"). */
+export function signed(x: number, digits = 1): string {
+  const shown = Number(x.toFixed(digits));
+  if (shown === 0) return fixed(0, digits);
+  return `${shown > 0 ? "+" : "\u2212"}${fixed(Math.abs(shown), digits)}`;
+}
 
 /** Rows for the fuel bars: each strategy's burnt and SOC-corrected fuel. */
 export function fuelRows(c: Comparison): { strategy: string; measure: string; grams: number }[] {

@@ -1,11 +1,14 @@
 // Vega-lite specs of the strategy comparison: fuel per strategy (as burnt and SOC-corrected)
 // and the SOC traces. Colours: fuel hue for burnt fuel, electric hue for the corrected share.
 import type { VisualizationSpec } from "vega-embed";
-import { CHART_CONFIG, ELECTRIC, FUEL, INK, LOSS, MUTED } from "@/components/charts/theme";
+import { CHART_CONFIG, ELECTRIC, FUEL } from "@/components/charts/theme";
+import { FIT_X, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
+import { SOC_COLORS } from "./rows";
 
 export const FUEL_BARS_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: FIT_X,
   width: "container",
   height: { step: 18 },
   data: { name: "fuel" },
@@ -22,14 +25,16 @@ export const FUEL_BARS_SPEC = {
 export const SOC_TRACES_SPEC = {
   $schema: "https://vega.github.io/schema/vega-lite/v6.json",
   config: CHART_CONFIG,
+  autosize: FIT_X,
   width: "container",
   height: 180,
   data: { name: "soc" },
   mark: { type: "line", strokeWidth: 1.5 },
   encoding: {
-    x: { field: "time_s", type: "quantitative", title: "time (s)" },
+    x: { field: "time_s", type: "quantitative", title: "time (s)", scale: TIME_SCALE, axis: TIME_AXIS },
     y: { field: "soc", type: "quantitative", title: "state of charge", scale: { zero: false } },
-    color: { field: "strategy", type: "nominal", sort: null, scale: { range: [MUTED, LOSS, INK] }, legend: { orient: "bottom", title: null } },
-    tooltip: [{ field: "strategy" }, { field: "time_s", title: "t (s)" }, { field: "soc", format: ".4f" }],
+    // key in HTML under the chart (strategy-comparison.tsx), same colours in the same order
+    color: { field: "strategy", type: "nominal", sort: null, scale: { range: SOC_COLORS }, legend: null },
+    tooltip: [{ field: "strategy" }, { field: "time_s", title: "t (s)", format: "," }, { field: "soc", format: ".4f" }],
   },
 } as unknown as VisualizationSpec;
