@@ -1,9 +1,9 @@
 import "server-only";
-// Server-side resolution of library references before compile (compile itself stays pure).
+// Server-side resolution of library references before compile (compile itself stays pure and
+// checks that each item is of the kind its field expects).
 import { getLibraryItemsData } from "@/db/library";
 import { isUuid } from "@/lib/authz";
-import type { BlockSnapshot, LibraryResolver } from "@/lib/notebook";
-import { LIBRARY_KIND_LABELS } from "./kinds";
+import type { BlockSnapshot, LibraryItemData, LibraryResolver } from "@/lib/notebook";
 import { libraryReferences } from "./references";
 
 export async function libraryResolverFor(args: { workspaceId: string; blocks: readonly BlockSnapshot[] }): Promise<LibraryResolver> {
@@ -12,7 +12,6 @@ export async function libraryResolverFor(args: { workspaceId: string; blocks: re
   return (id) => {
     const item = items.get(id);
     if (!item) return `no item "${id}" in this workspace's library (deleted, or from another workspace)`;
-    if (item.kind !== "cycle") return `"${item.name}" is a ${LIBRARY_KIND_LABELS[item.kind].toLowerCase()}, not a drive cycle`;
-    return item.data as { dt_s: number; speed_kmh: number[]; grade_pct?: number[] };
+    return { kind: item.kind, name: item.name, data: item.data } as LibraryItemData;
   };
 }

@@ -1,5 +1,5 @@
 import { BLOCK_TITLES, type BlockKind } from "./block-kinds";
-import { choice, list, num, type FieldDef } from "./fields";
+import { choice, libraryRef, list, num, type FieldDef } from "./fields";
 
 export * from "./block-kinds";
 export type { FieldDef, NumberField, ListField, ChoiceField, TextField } from "./fields";
@@ -18,7 +18,7 @@ const DRIVE_CYCLE: FieldDef[] = [
     "One speed per time step, from the start; e.g. 0, 5, 10 km/h.", onlyIf("source", "custom")),
   list("grade", "Road grade", ratio, "%", "cycle.grade_pct", "",
     "Optional, one value per speed sample; positive uphill. Bare numbers are percent.", { optional: true, ...onlyIf("source", "custom") }),
-  { type: "text", key: "library_id", label: "Library cycle", default: "", help: "Identifier of a cycle in the workspace library.", ...onlyIf("source", "library") },
+  libraryRef("library_id", "Library cycle", "A drive cycle saved in the workspace library.", { kind: "cycle", ...onlyIf("source", "library") }),
 ];
 
 const BODY: FieldDef[] = [
@@ -48,10 +48,11 @@ const ENGINE: FieldDef[] = [
   num("friction_mep", "Friction mean effective pressure", "pressure", "bar", "engine.friction_mep_bar", "1.5 bar", "p_me0 of the Willans line."),
   num("idle_speed", "Idle speed", "angular_speed", "rpm", "engine.idle_speed_rpm", "800 rpm", ""),
   num("max_speed", "Maximum speed", "angular_speed", "rpm", "engine.max_speed_rpm", "6000 rpm", ""),
+  libraryRef("full_load_library_id", "Full-load curve", "A curve saved in the workspace library; none: the speeds and torques below.", { kind: "engine_full_load", optional: true }),
   list("full_load_speeds", "Full-load curve: speeds", "angular_speed", "rpm", "engine.max_torque_nm.speed_rpm",
-    "800, 1500, 2500, 3500, 4500, 5500, 6000 rpm", "Breakpoints, increasing, from idle to maximum speed."),
+    "800, 1500, 2500, 3500, 4500, 5500, 6000 rpm", "Breakpoints, increasing, from idle to maximum speed.", { unlessSet: "full_load_library_id" }),
   list("full_load_torques", "Full-load curve: torques", "torque", "N·m", "engine.max_torque_nm.torque_nm",
-    "110, 135, 150, 155, 150, 140, 125 N·m", "One torque per speed breakpoint."),
+    "110, 135, 150, 155, 150, 140, 125 N·m", "One torque per speed breakpoint.", { unlessSet: "full_load_library_id" }),
   num("fuel_lhv", "Fuel lower heating value", "specific_energy", "MJ/kg", "engine.fuel.lhv_mj_kg", "42.7 MJ/kg", ""),
   num("fuel_density", "Fuel density", "density", "kg/L", "engine.fuel.density_kg_l", "0.745 kg/L", ""),
   num("fuel_co2", "CO2 per litre of fuel", "density", "kg/L", "engine.fuel.co2_kg_l", "2.31 kg/L", "Tank-to-wheel CO2 mass per litre burnt."),
@@ -71,8 +72,9 @@ const GENERATOR_SET: FieldDef[] = [
 
 const BATTERY_PACK: FieldDef[] = [
   num("capacity", "Capacity", "charge", "Ah", "battery.capacity_ah", "30 Ah", "Charge capacity (Ah, not kWh)."),
-  list("ocv_soc", "Open-circuit voltage: SOC points", ratio, "", "battery.ocv.soc", "0, 0.5, 1", "Increasing, within 0…1 (or 0 %, 50 %, 100 %)."),
-  list("ocv_voltage", "Open-circuit voltage: voltages", "voltage", "V", "battery.ocv.voltage_v", "320, 360, 400 V", "One voltage per SOC point."),
+  libraryRef("ocv_library_id", "Open-circuit voltage", "An OCV curve saved in the workspace library; none: the points below.", { kind: "battery_ocv", optional: true }),
+  list("ocv_soc", "Open-circuit voltage: SOC points", ratio, "", "battery.ocv.soc", "0, 0.5, 1", "Increasing, within 0…1 (or 0 %, 50 %, 100 %).", { unlessSet: "ocv_library_id" }),
+  list("ocv_voltage", "Open-circuit voltage: voltages", "voltage", "V", "battery.ocv.voltage_v", "320, 360, 400 V", "One voltage per SOC point.", { unlessSet: "ocv_library_id" }),
   num("resistance", "Internal resistance", "resistance", "Ω", "battery.resistance_ohm", "0.10 Ω", "Pack resistance."),
   num("soc_initial", "Initial SOC", ratio, "", "battery.soc_initial", "0.60", ""),
   num("soc_min", "Minimum SOC", ratio, "", "battery.soc_min", "0.30", ""),
@@ -115,8 +117,9 @@ export function fieldOf(kind: BlockKind, key: string): FieldDef | undefined {
   return FIELDS[kind].find((f) => f.key === key);
 }
 
-/** Is the field active given the block's current choice values? */
+/** Is the field active given the block's current choice values (and library references)? */
 export function fieldActive(field: FieldDef, params: Readonly<Record<string, string>>, kind: BlockKind): boolean {
+  if (field.unlessSet && (params[field.unlessSet] ?? "").trim() !== "") return false;
   if (!field.when) return true;
   const driver = fieldOf(kind, field.when.field);
   const current = (params[field.when.field] ?? driver?.default ?? "").trim();

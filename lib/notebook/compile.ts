@@ -4,6 +4,7 @@ import {
 } from "./block-kinds";
 import { fieldLabel } from "./blocks";
 import { compileFields, type FieldContext } from "./compile-fields";
+import { compileLibraryCurve, resolveOfKind, type LibraryResolver } from "./compile-library";
 import type { CompileMessage, SourceTable } from "./compile-types";
 import { SECTION_KIND, validateWithEngine } from "./compile-validate";
 import type * as Y from "yjs";
@@ -14,16 +15,13 @@ export type { CompileMessage, Source, SourceTable } from "./compile-types";
 
 export const SCENARIO_FORMAT = "joulebook.scenario/1";
 
-/** A drive cycle from the workspace library, as a resolver hands it to compile. */
-export type LibraryCycle = { dt_s: number; speed_kmh: number[]; grade_pct?: number[] };
-/** Looks up a library id (loaded beforehand: compile stays pure and synchronous); a string says why it cannot be used. */
-export type LibraryResolver = (id: string) => LibraryCycle | string;
+export type { LibraryCycle, LibraryFullLoad, LibraryItemData, LibraryOcv, LibraryResolver } from "./compile-library";
 
 export interface CompileInput {
   name: string;
   powertrain: PowertrainKind | null;
   blocks: readonly BlockSnapshot[];
-  /** Optional: without it a drive-cycle block whose source is the library is an error. */
+  /** Optional: without it a block that names a library item (cycle, full-load or OCV curve) is an error. */
   resolveLibrary?: LibraryResolver;
 }
 
@@ -101,8 +99,9 @@ function compileLibraryCycle(block: BlockSnapshot, scenario: Record<string, unkn
   err: (field: string, text: string) => void): void {
   const id = (block.params.library_id ?? "").trim();
   if (id === "") return err("library_id", "is empty; choose a cycle from the workspace library");
-  const found = resolve(id);
-  if (typeof found === "string") return err("library_id", found);
+  const item = resolveOfKind(resolve, id, "cycle");
+  if (typeof item === "string") return err("library_id", item);
+  const found = item.data;
   scenario.cycle = found.grade_pct ? { dt_s: found.dt_s, speed_kmh: found.speed_kmh, grade_pct: found.grade_pct } : { dt_s: found.dt_s, speed_kmh: found.speed_kmh };
   ctx.sources.set("cycle", { blockId: block.id, kind: "drive_cycle", field: "library_id" });
 }
@@ -133,7 +132,7 @@ export function compile(input: CompileInput): CompileResult {
       continue;
     }
     if (kind === "drive_cycle") compileCycle(block, scenario, ctx, input.resolveLibrary);
-    else compileSection(kind, block, scenario, ctx, pt);
+    else compileSection(kind, block, scenario, ctx, pt, input.resolveLibrary);
   }
   const blockOfKind = new Map([...chosen].map(([k, b]) => [k, b.id]));
   const checked = validateWithEngine(scenario, sources, blockOfKind, failed);
@@ -147,7 +146,8 @@ export function compileDoc(doc: Y.Doc): CompileResult {
   return compile(readDoc(doc));
 }
 
-function compileSection(kind: BlockKind, block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, pt: PowertrainKind): void {
+function compileSection(kind: BlockKind, block: BlockSnapshot, scenario: Record<string, unknown>, ctx: FieldContext, pt: PowertrainKind,
+  resolve?: LibraryResolver): void {
   const section = SECTION_OF[kind]!;
   scenario[section] = {};
   if (kind === "energy_manager") {
@@ -162,4 +162,5 @@ function compileSection(kind: BlockKind, block: BlockSnapshot, scenario: Record<
     }
   }
   compileFields(block, scenario, ctx);
+  compileLibraryCurve(block, scenario, ctx, resolve);
 }

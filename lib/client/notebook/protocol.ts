@@ -1,13 +1,13 @@
 // Messages between the notebook page and its evaluation worker. Plain JSON-like data only
 // (structured clone): the worker owns no Yjs state, it gets a snapshot of the document.
-import type { CompileMessage, DocSnapshot, LibraryCycle } from "@/lib/notebook";
+import type { CompileMessage, DocSnapshot, LibraryItemData } from "@/lib/notebook";
 import type { Result, Scenario } from "@/lib/engine";
 
 export interface EvaluateRequest {
   id: number;
   snapshot: DocSnapshot;
-  /** library id → cycle (or why it cannot be used), for drive-cycle blocks whose source is the library */
-  library?: Record<string, LibraryCycle | string>;
+  /** library id → item (or why it cannot be used), for the blocks' library references (cycle, full-load, OCV) */
+  library?: Record<string, LibraryItemData | string>;
 }
 
 /** blockId → field key → compiled value (Scenario unit), for showing "= 1600 kg" next to a field. */

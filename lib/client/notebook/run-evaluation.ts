@@ -1,7 +1,7 @@
 // compile (lib/notebook) → evaluate (lib/engine), as one pure function so the worker stays a
 // thin shell and tests can call it directly. Engine refusals are mapped back to the block and
 // field that wrote the offending Scenario value, like compile's own messages.
-import { compile, describeDimension, findUnit, fromSI, type CompileMessage, type DocSnapshot, type LibraryCycle, type ParameterResult, type SourceTable } from "@/lib/notebook";
+import { compile, describeDimension, findUnit, fromSI, type CompileMessage, type DocSnapshot, type LibraryItemData, type ParameterResult, type SourceTable } from "@/lib/notebook";
 import { pathKey } from "@/lib/notebook/compile-types";
 import { evaluateScenarioInput, type Scenario, type ScenarioError } from "@/lib/engine";
 import type { CompiledValues, EvaluateResponse, ParameterValues } from "./protocol";
@@ -34,9 +34,9 @@ function parameterValues(results: Map<string, ParameterResult>): ParameterValues
   return out;
 }
 
-export function runEvaluation(id: number, snapshot: DocSnapshot, library?: Record<string, LibraryCycle | string>): EvaluateResponse {
+export function runEvaluation(id: number, snapshot: DocSnapshot, library?: Record<string, LibraryItemData | string>): EvaluateResponse {
   const started = performance.now();
-  const resolveLibrary = library ? (key: string) => library[key] ?? "loading the cycle from the library…" : undefined;
+  const resolveLibrary = library ? (key: string) => library[key] ?? "loading from the library…" : undefined;
   const compiled = compile({ ...snapshot, resolveLibrary });
   const values = plainValues(compiled.values);
   const parameters = parameterValues(compiled.parameters);

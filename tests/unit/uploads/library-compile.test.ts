@@ -2,7 +2,7 @@
 // uploaded samples reach the engine unchanged.
 import { describe, expect, it } from "vitest";
 import * as Y from "yjs";
-import { compile, createScenarioDoc, readDoc, findBlock, setParam, type LibraryResolver } from "@/lib/notebook";
+import { compile, createScenarioDoc, readDoc, findBlock, setParam, type LibraryItemData, type LibraryResolver } from "@/lib/notebook";
 import { evaluateScenarioInput } from "@/lib/engine";
 import { libraryReferences } from "@/lib/library/references";
 import { previewCycle } from "@/lib/uploads";
@@ -20,7 +20,7 @@ function docWithLibraryCycle(id: string) {
 describe("library cycles in the notebook compile", () => {
   const upload = previewCycle({ text: "time [s],speed [km/h]\n0,0\n10,36\n20,36\n30,0\n" });
   if (!upload.ok) throw new Error("fixture upload failed");
-  const cycles: Record<string, { dt_s: number; speed_kmh: number[] }> = { "c-1": upload.cycle };
+  const cycles: Record<string, LibraryItemData> = { "c-1": { kind: "cycle", name: "upload", data: upload.cycle } };
   const resolve: LibraryResolver = (id) => cycles[id] ?? `no cycle "${id}" in this workspace's library`;
 
   it("finds the referenced ids", () => {
@@ -53,12 +53,12 @@ describe("library cycles in the notebook's live evaluation", () => {
   it("runEvaluation uses the library entries sent with the request", async () => {
     const { runEvaluation } = await import("@/lib/client/notebook/run-evaluation");
     const { snap } = docWithLibraryCycle("c-1");
-    const out = runEvaluation(1, snap, { "c-1": { dt_s: 10, speed_kmh: [0, 36, 36, 0] } });
+    const out = runEvaluation(1, snap, { "c-1": { kind: "cycle", name: "c", data: { dt_s: 10, speed_kmh: [0, 36, 36, 0] } } });
     expect(out.ok).toBe(true);
     if (out.ok) expect(out.result.kpi.distance_km).toBeCloseTo(0.2, 12);
     const loading = runEvaluation(2, snap, {});
     expect(loading.ok).toBe(false);
-    expect(loading.messages.some((m) => m.field === "library_id" && m.text.includes("loading the cycle from the library"))).toBe(true);
+    expect(loading.messages.some((m) => m.field === "library_id" && m.text.includes("loading from the library"))).toBe(true);
   });
 
   it("the browser cache fetches each id once, then re-runs with the data", async () => {
@@ -74,13 +74,13 @@ describe("library cycles in the notebook's live evaluation", () => {
     try {
       let reruns = 0;
       const cache = createLibraryCache("w-1", () => { reruns++; });
-      expect(cache.lookup([id])[id]).toBe("loading the cycle from the library…");
-      expect(cache.lookup([id])[id]).toBe("loading the cycle from the library…");
+      expect(cache.lookup([id])[id]).toBe("loading from the library…");
+      expect(cache.lookup([id])[id]).toBe("loading from the library…");
       await new Promise((r) => setTimeout(r, 0));
       expect(reruns).toBe(1);
-      expect(cache.lookup([id])[id]).toEqual({ dt_s: 1, speed_kmh: [0, 1] });
+      expect(cache.lookup([id])[id]).toEqual({ kind: "cycle", name: "x", data: { dt_s: 1, speed_kmh: [0, 1] } });
       expect(calls).toEqual([`/api/workspaces/w-1/library/${id}`]);
-      expect(cache.lookup(["not-an-id"])["not-an-id"]).toBe('"not-an-id" is not a library id (copy it from the Library page)');
+      expect(cache.lookup(["not-an-id"])["not-an-id"]).toBe('"not-an-id" is not a library id (choose an item from the list)');
     } finally {
       globalThis.fetch = original;
     }
