@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { ApiError } from "@/lib/client/api";
-import { LIBRARY_KIND_LABELS } from "@/lib/library/kinds";
+import { LIBRARY_KIND_BLOCKS, LIBRARY_KIND_LABELS } from "@/lib/library/kinds";
 import { deleteLibraryItem, libraryKey, listLibrary, type LibraryRow } from "./api";
 import { summaryPairs } from "./summary-figures";
 import { BlockValues } from "./block-values";
@@ -46,7 +46,7 @@ export function LibraryTable({ workspaceId, canDelete, initial }: { workspaceId:
             <tr key={row.id} className="border-t border-rule align-top">
               <td className="py-2 pr-3 font-medium">
                 {row.name}
-                <div className="font-mono text-xs text-muted" title="library id for drive-cycle blocks">{row.id}</div>
+                <div className="font-mono text-xs text-muted" title={`library id, chosen in the notebook's ${LIBRARY_KIND_BLOCKS[row.kind]}`}>{row.id}</div>
                 <BlockValues workspaceId={workspaceId} id={row.id} kind={row.kind} />
               </td>
               <td className="pr-3">{LIBRARY_KIND_LABELS[row.kind]}</td>
@@ -60,7 +60,7 @@ export function LibraryTable({ workspaceId, canDelete, initial }: { workspaceId:
               <td>
                 {canDelete ? (
                   <Button variant="danger" className="px-2 py-1 text-xs" disabled={remove.isPending || row.usedBy.length > 0}
-                    title={row.usedBy.length > 0 ? "in use: change the documents' drive-cycle blocks first" : undefined}
+                    title={row.usedBy.length > 0 ? `in use: change the documents' ${LIBRARY_KIND_BLOCKS[row.kind]} first` : undefined}
                     onClick={() => { if (window.confirm(`Delete "${row.name}" from the library?`)) remove.mutate(row.id); }}>Delete</Button>
                 ) : null}
               </td>

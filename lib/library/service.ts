@@ -6,6 +6,7 @@ import { authorizeWorkspace, isUuid } from "@/lib/authz";
 import { Conflict, NotFound } from "@/lib/http/errors";
 import type { UploadInput } from "@/lib/uploads";
 import { documentsUsingLibrary, type DocumentRef } from "./usage";
+import { LIBRARY_KIND_BLOCKS, type LibraryKind } from "./kinds";
 import { previewUpload, type UploadPreview } from "./preview";
 import type { SaveRequest } from "./schemas";
 
@@ -46,8 +47,8 @@ export async function readLibraryItem(args: { userId: string; workspaceId: strin
 }
 
 export class InUse extends Conflict {
-  constructor(readonly documents: DocumentRef[], name: string) {
-    super(`"${name}" is used by ${documents.length} document${documents.length === 1 ? "" : "s"}: ${documents.map((d) => `"${d.title}"`).join(", ")}; change their drive-cycle blocks first`);
+  constructor(readonly documents: DocumentRef[], name: string, kind: LibraryKind) {
+    super(`"${name}" is used by ${documents.length} document${documents.length === 1 ? "" : "s"}: ${documents.map((d) => `"${d.title}"`).join(", ")}; change their ${LIBRARY_KIND_BLOCKS[kind]} first`);
   }
   override body(): Record<string, unknown> {
     return { error: this.message, documents: this.documents };
@@ -59,6 +60,6 @@ export async function removeLibraryItem(args: { userId: string; workspaceId: str
   const item = isUuid(args.itemId) ? await getLibraryItem({ workspaceId: args.workspaceId, itemId: args.itemId }) : null;
   if (!item) throw new NotFound("no such library item in this workspace");
   const users = (await documentsUsingLibrary({ workspaceId: args.workspaceId })).get(item.id) ?? [];
-  if (users.length > 0) throw new InUse(users, item.name);
+  if (users.length > 0) throw new InUse(users, item.name, item.kind);
   await deleteLibraryItem({ workspaceId: args.workspaceId, itemId: args.itemId });
 }

@@ -1,7 +1,8 @@
 import "server-only";
 // Usage of library items, computed from the documents' current content: a document uses an
-// item when one of its drive-cycle blocks has the library as source and the item's id. Nothing
-// is stored, so usage cannot go stale when a block changes (see db/schema-library.ts).
+// item when one of its blocks names the item's id in an active library field (a drive cycle
+// whose source is the library, an engine's full-load curve, a battery's OCV curve; see
+// references.ts). Nothing is stored, so usage cannot go stale when a block changes (see db/schema-library.ts).
 import * as Y from "yjs";
 import { loadWorkspaceDocumentStates } from "@/db/library-usage";
 import { readDoc } from "@/lib/notebook";

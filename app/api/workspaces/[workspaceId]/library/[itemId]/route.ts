@@ -3,7 +3,7 @@ import { readLibraryItem, removeLibraryItem } from "@/lib/library/service";
 
 type Params = { workspaceId: string; itemId: string };
 
-// ?usage=1 adds usedBy (documents whose drive-cycle blocks name the item).
+// ?usage=1 adds usedBy (documents whose blocks name the item: cycle, full-load or OCV reference).
 export const GET = route<Params>({}, async (ctx) => {
   const { user } = await ctx.requireUser();
   const withUsage = new URL(ctx.request.url).searchParams.get("usage") === "1";
