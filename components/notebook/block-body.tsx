@@ -26,7 +26,8 @@ const NO_MESSAGES: CompileMessage[] = [];
 
 function FieldsForm({ id, kind, map, messages, values }: { id: string; kind: BlockKind; map: BlockMap; messages: CompileMessage[]; values: Record<string, unknown> | undefined }) {
   const fields = FIELDS[kind];
-  const drivers = Array.from(new Set(fields.flatMap((f) => (f.when ? [f.when.field] : []))));
+  // fields that decide which others show: choices (`when`) and library references (`unlessSet`)
+  const drivers = Array.from(new Set(fields.flatMap((f) => [...(f.when ? [f.when.field] : []), ...(f.unlessSet ? [f.unlessSet] : [])])));
   const choices = useParamValues(map, drivers);
   return (
     <div className="grid gap-x-6 gap-y-3 lg:grid-cols-2">

@@ -2,9 +2,11 @@
 // One parameter of a block: label, CodeMirror editor bound to its Y.Text (or a select for a
 // choice), the compiled value in the Scenario's unit, and compile messages under it.
 import { memo, useId } from "react";
-import { fieldLabel, setParam, type BlockKind, type BlockMap, type ChoiceField, type CompileMessage, type FieldDef } from "@/lib/notebook";
+import { fieldLabel, setParam, type BlockKind, type BlockMap, type ChoiceField, type CompileMessage, type FieldDef, type TextField } from "@/lib/notebook";
+import type { LibraryKind } from "@/lib/library/kinds";
 import { fmtValue } from "@/lib/client/notebook/format";
 import { FieldMessages } from "./field-messages";
+import { LibraryPicker } from "./library-picker";
 import { useNotebook } from "./notebook-context";
 import { TextEditor } from "./text-editor";
 import { paramsOf, useParamText } from "./use-param-text";
@@ -17,13 +19,15 @@ export const FieldRow = memo(function FieldRow({ blockId, kind, map, field, mess
   return (
     <div className={`min-w-0 ${field.type === "list" ? "lg:col-span-2" : ""}`} data-field={field.key}>
       <div className="mb-1 flex flex-wrap items-baseline gap-x-2">
-        <label htmlFor={field.type === "choice" ? id : undefined} id={`${id}-label`} className="text-sm font-medium text-ink">
+        <label htmlFor={field.type === "choice" || isLibraryRef(field) ? id : undefined} id={`${id}-label`} className="text-sm font-medium text-ink">
           {field.label}
         </label>
         {field.optional ? <span className="text-xs text-muted">optional</span> : null}
       </div>
       {field.type === "choice" ? (
         <ChoiceInput id={id} blockId={blockId} map={map} field={field} label={label} invalid={own.length > 0} />
+      ) : isLibraryRef(field) ? (
+        <LibraryPicker id={id} blockId={blockId} map={map} field={field} label={label} invalid={own.some((m) => m.severity === "error")} describedBy={own.length > 0 ? `${id}-messages` : undefined} />
       ) : (
         <TextInput map={map} field={field} label={label} invalid={own.some((m) => m.severity === "error")} messagesId={`${id}-messages`} blockId={blockId} />
       )}
@@ -35,6 +39,10 @@ export const FieldRow = memo(function FieldRow({ blockId, kind, map, field, mess
     </div>
   );
 });
+
+function isLibraryRef(field: FieldDef): field is TextField & { library: LibraryKind } {
+  return field.type === "text" && field.library !== undefined;
+}
 
 function TextInput({ map, field, label, invalid, messagesId, blockId }: { map: BlockMap; field: FieldDef; label: string; invalid: boolean; messagesId: string; blockId: string }) {
   const { awareness, undoManager, canEdit, focusBlock, doc } = useNotebook();

@@ -17,6 +17,8 @@ export interface NotebookContextValue {
   focusBlock: (blockId: string) => void;
   /** runs a structural change (add, move, delete, …) as its own undo step */
   step: (change: () => void) => void;
+  /** the document's workspace (its library feeds the library-reference pickers) */
+  workspaceId: string;
 }
 
 export const NotebookContext = createContext<NotebookContextValue | null>(null);

@@ -76,8 +76,8 @@ export function Notebook({ collab, canEdit, archived, role, workspaceId, documen
   const valuesByBlock = useStableEntries(useMemo(() => new Map(Object.entries(evaluation.values)), [evaluation.values]));
 
   const context: NotebookContextValue = useMemo(
-    () => ({ doc, awareness, undoManager: undo.manager, canEdit, blocks, focusBlock, step }),
-    [doc, awareness, undo.manager, canEdit, blocks, focusBlock, step],
+    () => ({ doc, awareness, undoManager: undo.manager, canEdit, blocks, focusBlock, step, workspaceId }),
+    [doc, awareness, undo.manager, canEdit, blocks, focusBlock, step, workspaceId],
   );
   const name = meta.name || fallbackName;
   const powertrain = meta.powertrain ?? fallbackPowertrain;

@@ -70,3 +70,16 @@ export function useParamNames(map: BlockMap): string[] {
   }, [map]);
   return names;
 }
+
+/** The current content of a Y.Text (or "" without one), re-rendering on every change, local or remote. */
+export function useTextValue(text: Y.Text | null): string {
+  const [value, setValue] = useState(() => text?.toString() ?? "");
+  useEffect(() => {
+    setValue(text?.toString() ?? "");
+    if (!text) return;
+    const onChange = () => setValue(text.toString());
+    text.observe(onChange);
+    return () => text.unobserve(onChange);
+  }, [text]);
+  return value;
+}

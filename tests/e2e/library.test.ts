@@ -65,13 +65,33 @@ describe("team library and API tokens in the browser", () => {
     await page.locator('[data-connection="connected"]').waitFor();
     const cycleBlock = page.locator('[data-block-kind="drive_cycle"]');
     await cycleBlock.locator('[data-field="source"] select').selectOption("library");
-    await cycleBlock.locator('[data-field="library_id"] .cm-content').click();
-    await page.keyboard.type(itemId);
+    // the picker lists the workspace's cycles by name and stores the id in the block
+    const picker = cycleBlock.locator('[data-field="library_id"] select');
+    expect(await picker.locator("option:checked").innerText()).toBe("none");
+    await picker.selectOption(itemId);
+    expect(await picker.locator("option:checked").innerText()).toMatch(/^depot/);
     // the uploaded 30 s, 200 m cycle is evaluated live in the page
     await page.locator('[data-block-kind="headline_figures"]').getByText("0.20 km in 30 s").waitFor();
     await screenshot(page, "library-04-document-uses-cycle");
+
+    // a battery OCV curve from the library replaces the block's OCV points
+    const origin = { origin: new URL(appUrl("/")).origin };
+    const ocvText = "SOC [%],OCV [V]\n0,330\n50,365\n100,400\n";
+    const ocvPreview = (await (await page.request.post(appUrl(`/api/workspaces/${workspaceId}/library/preview`), { data: { kind: "battery_ocv", text: ocvText }, headers: origin })).json()) as { confirmation: unknown };
+    const savedOcv = await page.request.post(appUrl(`/api/workspaces/${workspaceId}/library`), {
+      data: { kind: "battery_ocv", text: ocvText, confirmation: ocvPreview.confirmation, name: "bench OCV", source_note: "" }, headers: origin,
+    });
+    expect(savedOcv.status()).toBe(201);
+    await page.reload();
+    await page.locator('[data-connection="connected"]').waitFor();
+    const batteryBlock = page.locator('[data-block-kind="battery_pack"]');
+    await batteryBlock.locator('[data-field="ocv_library_id"] select').selectOption({ label: "bench OCV" });
+    await batteryBlock.locator('[data-field="ocv_soc"]').waitFor({ state: "detached" });
+    await page.locator('[data-block-kind="headline_figures"]').getByText("0.20 km in 30 s").waitFor();
+    await screenshot(page, "library-05-document-uses-ocv");
     await gotoApp(page, `/w/${workspaceId}/library`);
-    await page.getByText("used by 1 document").waitFor();
+    await page.getByRole("row", { name: /^depot/ }).getByText("used by 1 document").waitFor();
+    await page.getByRole("row", { name: /bench OCV/ }).getByText("used by 1 document").waitFor();
 
     // export the results: traces CSV (3 intervals of 10 s), summary page, chart PNG
     const exportBase = appUrl(`/api/workspaces/${workspaceId}/documents/${documentId}/export`);
