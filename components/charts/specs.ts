@@ -129,24 +129,26 @@ export const OPERATING_POINTS_SPEC = {
   autosize: FIT_X,
   width: "container",
   height: 280,
+  encoding: {
+    // from idle to the top of the curve, not from 0 rpm, where an engine never runs
+    x: { field: "speed_rpm", type: "quantitative", title: "engine speed (rpm)", scale: { zero: false }, axis: { format: ",~f" } },
+    y: { field: "torque_nm", type: "quantitative", title: "engine torque (N·m)", axis: { format: ",~f" } },
+  },
   layer: [
-    {
-      data: { name: "points" },
-      mark: { type: "circle", size: 14, opacity: 0.45, color: FUEL },
-      encoding: {
-        x: { field: "speed_rpm", type: "quantitative", title: "engine speed (rpm)" },
-        y: { field: "torque_nm", type: "quantitative", title: "engine torque (N·m)" },
-      },
-    },
     {
       data: { name: "curve" },
       mark: { type: "line", color: INK, strokeWidth: 2, point: { filled: true, size: 24, color: INK } },
+      encoding: { tooltip: [{ field: "speed_rpm", title: "rpm" }, { field: "torque_nm", title: "N·m", format: ".1f" }] },
+    },
+    {
+      // drawn over the curve, so points at full load stay visible; area grows with the steps
+      // spent at the point (a genset's fixed point is one big dot, not one small one)
+      data: { name: "points" },
+      mark: { type: "circle", opacity: 0.55, color: FUEL },
       encoding: {
-        x: { field: "speed_rpm", type: "quantitative" },
-        y: { field: "torque_nm", type: "quantitative" },
-        tooltip: [{ field: "speed_rpm", title: "rpm" }, { field: "torque_nm", title: "N·m", format: ".1f" }],
+        size: { field: "steps", type: "quantitative", scale: { type: "sqrt", range: [16, 400], zero: true }, legend: null },
+        tooltip: [{ field: "speed_rpm", title: "rpm", format: "," }, { field: "torque_nm", title: "N·m" }, { field: "steps", title: "steps here" }],
       },
     },
   ],
 } as VisualizationSpec;
-

@@ -3,10 +3,11 @@
 // placeholder for documents that already carry that block.
 import { useMemo } from "react";
 import type { Result } from "@/lib/engine";
-import { flowRows, fullLoadCurve, operatingPoints, tracePanels, type TracePanelData } from "@/lib/client/notebook/chart-data";
+import { distinctPoints, flowRows, fullLoadCurve, operatingPoints, tracePanels, type PointCell, type TracePanelData } from "@/lib/client/notebook/chart-data";
 import { Chart } from "@/components/charts/chart";
 import { ENERGY_FLOW_SPEC, OPERATING_POINTS_SPEC, SERIES_DOMAIN, SERIES_RANGE, tracePanelSpec } from "@/components/charts/specs";
 import { ColorKey } from "@/components/charts/color-key";
+import { FUEL, INK } from "@/components/charts/theme";
 import { WithResult } from "./result-state";
 import { GroupLegend } from "@/components/charts/group-legend";
 import { useEvaluationState } from "./notebook-context";
@@ -63,15 +64,32 @@ export function OperatingPoints() {
 }
 
 function PointsBody({ result }: { result: Result }) {
-  const datasets = useMemo(() => ({ points: operatingPoints(result), curve: fullLoadCurve(result) }), [result]);
-  if (!result.curves.engine_full_load) return <p className="text-sm text-muted">This powertrain has no engine.</p>;
+  const points = useMemo(() => operatingPoints(result), [result]);
+  const datasets = useMemo(() => ({ points: distinctPoints(points), curve: fullLoadCurve(result) }), [points, result]);
+  if (!result.curves.engine_full_load) {
+    return <p className="text-sm text-muted">No operating points: this powertrain has no engine. The electric machine's figures are in the loss ledger and the traces.</p>;
+  }
   return (
     <>
-      <p className="mb-2 text-sm text-muted">Each dot is one step with the engine running; the line is the full-load torque curve.</p>
+      <p className="mb-2 text-sm text-muted">{pointsCaption(points.length, datasets.points)}</p>
       <Chart spec={OPERATING_POINTS_SPEC} datasets={datasets} label="Engine operating points over the full-load curve" />
+      <ColorKey items={POINTS_KEY} label="Colour key: operating points" />
     </>
   );
 }
+
+function pointsCaption(steps: number, cells: readonly PointCell[]): string {
+  if (steps === 0) return "The engine did not run on this cycle, so there are no operating points; the line is the full-load torque curve.";
+  const n = `${steps.toLocaleString("en-GB")} step${steps === 1 ? "" : "s"}`;
+  // a few fixed points (a genset's thermostat) sit on the curve: say where they are
+  if (cells.length <= 3) {
+    const where = cells.map((p) => `${p.speed_rpm.toLocaleString("en-GB")} rpm and ${p.torque_nm} N·m`).join("; ");
+    return `The engine ran ${n}, all at ${cells.length === 1 ? "one operating point" : `${cells.length} operating points`} (${where}); the line is the full-load torque curve.`;
+  }
+  return `Where the engine ran (${n}): a dot's area grows with the steps spent at that point; the line is the full-load torque curve.`;
+}
+
+const POINTS_KEY = [{ label: "engine running (area: steps at the point)", color: FUEL, shape: "dot" as const }, { label: "full-load torque", color: INK }];
 
 /** Rule vs ECMS vs DP on the current scenario, run on demand in its own worker (components/strategy). */
 export function StrategyComparison() {

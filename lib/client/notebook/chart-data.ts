@@ -170,6 +170,29 @@ export function operatingPoints(result: Result): OperatingPoint[] {
   return out;
 }
 
+export interface PointCell extends OperatingPoint {
+  /** steps the engine ran at this point */
+  steps: number;
+}
+
+/**
+ * Operating points merged at 10 rpm and 1 N·m (finer than a dot on the chart), with the number
+ * of steps at each: a genset run at fixed points spends hundreds of steps on one or two points,
+ * which a plain scatter draws as a single dot of the same size as a one-step point.
+ */
+export function distinctPoints(points: readonly OperatingPoint[]): PointCell[] {
+  const cells = new Map<string, PointCell>();
+  for (const p of points) {
+    const w = Math.round(p.speed_rpm / 10) * 10;
+    const t = Math.round(p.torque_nm);
+    const key = `${w}:${t}`;
+    const cell = cells.get(key);
+    if (cell) cell.steps += 1;
+    else cells.set(key, { speed_rpm: w, torque_nm: t, steps: 1 });
+  }
+  return [...cells.values()];
+}
+
 export function fullLoadCurve(result: Result): OperatingPoint[] {
   const c = result.curves.engine_full_load;
   if (!c) return [];

@@ -84,3 +84,25 @@ describe("helpers", () => {
     expect(blockKindOfFinding({ component: "something else" })).toBeNull();
   });
 });
+
+describe("operating points of a genset at a fixed point (the demo's range extender, docs/demo.md)", () => {
+  test("hundreds of steps collapse to the few points the engine really ran at", async () => {
+    const { distinctPoints } = await import("@/lib/client/notebook/chart-data");
+    const { demoDocument } = await import("@/lib/demo");
+    const compiled = compile(readDoc(demoDocument("series-route").build()));
+    const out = evaluateScenarioInput(compiled.scenario!);
+    if (!out.ok) throw new Error("the demo range extender must evaluate");
+    const pts = operatingPoints(out.result);
+    expect(pts.length).toBeGreaterThan(100);
+    const distinct = distinctPoints(pts);
+    // the thermostat runs the genset at its rated 60 kW only (lib/demo/series.ts)
+    expect(distinct.length).toBeLessThanOrEqual(3);
+    for (const d of distinct) expect((d.speed_rpm * Math.PI / 30) * d.torque_nm / 1000).toBeGreaterThan(50);
+    // every step is counted once
+    expect(distinct.reduce((sum, d) => sum + d.steps, 0)).toBe(pts.length);
+    expect(distinctPoints([{ speed_rpm: 1500, torque_nm: 100 }, { speed_rpm: 1503, torque_nm: 100.2 }, { speed_rpm: 1600, torque_nm: 100 }])).toEqual([
+      { speed_rpm: 1500, torque_nm: 100, steps: 2 },
+      { speed_rpm: 1600, torque_nm: 100, steps: 1 },
+    ]);
+  });
+});
