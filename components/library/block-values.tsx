@@ -1,6 +1,7 @@
 "use client";
-// Component tables are used by copying their lists into the engine or battery block's list
-// fields (the notebook's list syntax: "800, 1500, 3000 rpm"); cycles by their id.
+// Blocks pick library items by name (the notebook's library pickers store the id). A component
+// table's lists can also be copied into the block's own list fields (the notebook's list syntax:
+// "800, 1500, 3000 rpm"), for a variant that edits the points; a cycle's id can be copied for the API.
 import { useState } from "react";
 import { api } from "@/lib/client/api";
 import type { LibraryKind } from "@/lib/library/kinds";
@@ -12,7 +13,7 @@ export function BlockValues({ workspaceId, id, kind }: { workspaceId: string; id
   if (kind === "cycle") {
     return (
       <button type="button" className="text-xs underline" onClick={() => void navigator.clipboard?.writeText(id).then(() => setCopied(id))}>
-        {copied ? "id copied" : "copy id for a drive-cycle block"}
+        {copied ? "id copied" : "copy id (for the API)"}
       </button>
     );
   }
@@ -21,7 +22,7 @@ export function BlockValues({ workspaceId, id, kind }: { workspaceId: string; id
       if ((e.target as HTMLDetailsElement).open && !rows)
         void api<{ item: { data: Data } }>(`/api/workspaces/${encodeURIComponent(workspaceId)}/library/${encodeURIComponent(id)}`).then((r) => setRows(lines(kind, r.item.data)));
     }}>
-      <summary className="cursor-pointer text-xs underline">values for a block</summary>
+      <summary className="cursor-pointer text-xs underline">values to edit in a block</summary>
       {rows ? (
         <ul className="mt-1 space-y-1">
           {rows.map(([field, text]) => (
