@@ -10,9 +10,14 @@ import { libraryKey, listLibrary, type LibraryRow } from "@/components/library/a
 import { useNotebook } from "./notebook-context";
 import { useParamText, useTextValue } from "./use-param-text";
 
+function kindPhrase(kind: LibraryKind): string {
+  const label = LIBRARY_KIND_LABELS[kind].toLowerCase();
+  return `${/^[aeiou]/.test(label) ? "an" : "a"} ${label}`;
+}
+
 /** What the select shows for an id that is not among the items of the right kind. */
 function strayLabel(id: string, item: LibraryRow | undefined, pending: boolean, wanted: LibraryKind): string {
-  if (item) return `${item.name} (a ${LIBRARY_KIND_LABELS[item.kind].toLowerCase()}, not a ${LIBRARY_KIND_LABELS[wanted].toLowerCase()})`;
+  if (item) return `${item.name} (${kindPhrase(item.kind)}, not ${kindPhrase(wanted)})`;
   return pending ? "loading the library…" : `not in the library: ${id}`;
 }
 
