@@ -118,6 +118,15 @@ describe("team library and API tokens in the browser", () => {
       battery: { capacity_ah: 60, ocv: { soc: [0, 1], voltage_v: [330, 400] }, resistance_ohm: 0.1, soc_initial: 0.8, soc_min: 0.1, soc_max: 0.95, max_discharge_c: 5, max_charge_c: 3 } };
     const res = await fetch(appUrl("/api/evaluate"), { method: "POST", headers: { authorization: `Bearer ${token}`, "content-type": "application/json" }, body: JSON.stringify(scenario) });
     expect(res.status).toBe(200);
+
+    // read-only (the document archived): the pickers show the items' names, not selects
+    const archived = await page.request.post(appUrl(`/api/workspaces/${workspaceId}/documents/${documentId}/archive`), { headers: origin });
+    expect(archived.ok()).toBe(true);
+    await gotoApp(page, `/w/${workspaceId}/documents/${documentId}`);
+    await page.locator('[data-connection="connected"]').waitFor();
+    await page.locator('[data-block-kind="drive_cycle"] [data-field="library_id"]').getByText(/^depot/).waitFor();
+    await page.locator('[data-block-kind="battery_pack"] [data-field="ocv_library_id"]').getByText("bench OCV").waitFor();
+    expect(await page.locator('[data-field="library_id"] select, [data-field="ocv_library_id"] select').count()).toBe(0);
     expect(watch.take()).toEqual([]);
   });
 });
