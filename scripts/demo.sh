@@ -12,7 +12,8 @@ ensure_node_modules
 
 PG_BASE="$(pg_base_for "$ROOT/.data/pg")"
 cleanup() { trap - EXIT INT TERM; log "stopping"; stop_services; pg_stop "$PG_BASE"; }
-trap cleanup EXIT INT TERM
+trap cleanup EXIT
+trap 'cleanup; exit 130' INT TERM
 
 pg_start "$PG_BASE" "$PG_PORT"
 pg_createdb "$PG_PORT" joulebook
