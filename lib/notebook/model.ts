@@ -26,10 +26,7 @@ export interface BlockSnapshot {
   note: string;
 }
 
-export interface DocSnapshot {
-  name: string;
-  /** null when the document has none (or an unknown one) */
-  powertrain: PowertrainKind | null;
+export interface DocSnapshot extends DocMeta {
   blocks: BlockSnapshot[];
 }
 
@@ -226,13 +223,23 @@ export function setMeta(doc: Y.Doc, meta: { name?: string; powertrain?: Powertra
   });
 }
 
-export function readDoc(doc: Y.Doc): DocSnapshot {
+export interface DocMeta {
+  name: string;
+  /** null when the document has none (or an unknown one) */
+  powertrain: PowertrainKind | null;
+}
+
+/** The document's name and powertrain; an unknown powertrain reads as null. */
+export function readMeta(doc: Y.Doc): DocMeta {
   const m = metaOf(doc);
   const name = m.get("name");
   const pt = m.get("powertrain");
   return {
     name: typeof name === "string" ? name : "",
     powertrain: (POWERTRAINS as readonly unknown[]).includes(pt) ? (pt as PowertrainKind) : null,
-    blocks: readBlocks(doc),
   };
+}
+
+export function readDoc(doc: Y.Doc): DocSnapshot {
+  return { ...readMeta(doc), blocks: readBlocks(doc) };
 }

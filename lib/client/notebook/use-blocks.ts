@@ -4,8 +4,8 @@
 // moving the same block at once are shown once and, for editors, removed from the document.
 import { useEffect, useState } from "react";
 import type * as Y from "yjs";
-import { blocksOf, dedupeBlocks, metaOf, type BlockMap } from "@/lib/notebook";
-import { isBlockKind, type BlockKind, type PowertrainKind, POWERTRAINS } from "@/lib/notebook";
+import { blocksOf, dedupeBlocks, metaOf, readMeta, type BlockMap, type DocMeta } from "@/lib/notebook";
+import { isBlockKind, type BlockKind } from "@/lib/notebook";
 
 export interface BlockRef {
   id: string;
@@ -42,20 +42,7 @@ export function useBlocks(doc: Y.Doc, canEdit: boolean): BlockRef[] {
   return blocks;
 }
 
-export interface Meta {
-  name: string;
-  powertrain: PowertrainKind | null;
-}
-
-function readMeta(doc: Y.Doc): Meta {
-  const m = metaOf(doc);
-  const name = m.get("name");
-  const pt = m.get("powertrain");
-  return {
-    name: typeof name === "string" ? name : "",
-    powertrain: (POWERTRAINS as readonly unknown[]).includes(pt) ? (pt as PowertrainKind) : null,
-  };
-}
+export type Meta = DocMeta;
 
 export function useMeta(doc: Y.Doc): Meta {
   const [meta, setMeta] = useState<Meta>(() => readMeta(doc));
