@@ -10,7 +10,7 @@ import { libraryResolverFor } from "@/lib/library/resolver";
 import { diffVersions } from "../diff";
 import { applySnapshot } from "../restore";
 import type { NotebookDiff, ResultSummary, VersionSide } from "../types";
-import { assertWritable, authorizeDocument, requireVersion } from "./access";
+import { assertNotArchived, authorizeDocument, requireVersion } from "./access";
 import { pushUpdateToCollab } from "./collab-push";
 
 type DocArgs = { userId: string; workspaceId: string; documentId: string };
@@ -42,7 +42,7 @@ function versionJson(v: Omit<VersionListItem, "kpi"> & { kpi: VersionListItem["k
 
 export async function saveVersion(args: DocArgs & { name: string; message: string }): Promise<VersionJson> {
   const { document } = await authorizeDocument({ ...args, action: "version.save" });
-  assertWritable(document);
+  assertNotArchived(document);
   const state = await loadDocumentState({ documentId: args.documentId });
   const snapshot = snapshotOfState(state);
   const content = versionContent(snapshot, await libraryResolverFor({ workspaceId: args.workspaceId, blocks: snapshot.blocks }));
@@ -98,7 +98,7 @@ export async function diffRefs(args: DocArgs & { from: string; to: string }): Pr
 export async function restoreVersion(args: DocArgs & { versionId: string }): Promise<{ changed: boolean; deliveredLive: boolean }> {
   const { document } = await authorizeDocument({ ...args, action: "document.edit" });
   await authorizeDocument({ ...args, action: "version.save" });
-  assertWritable(document);
+  assertNotArchived(document);
   const version = await requireVersion(args);
   const target = snapshotOfState(version.yjsState);
   const live = docFromState(await loadDocumentState({ documentId: args.documentId }));
