@@ -5,19 +5,10 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { openPerson, screenshot, type Person } from "./support/browser";
 import { ConsoleWatch } from "./support/console-watch";
-import { gotoApp, pathOf } from "./support/flows";
-import { DEMO_PASSWORD, DEMO_USERS } from "../../scripts/seed/foundation";
+import { gotoApp, signInDemo } from "./support/flows";
+import { DEMO_USERS } from "../../scripts/seed/foundation";
 
 const email = (role: string) => DEMO_USERS.find((u) => u.role === role)!.email;
-
-async function signIn(page: Page, who: string): Promise<string> {
-  await gotoApp(page, "/sign-in");
-  await page.getByLabel("E-mail", { exact: true }).fill(who);
-  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(/\/w\//);
-  return pathOf(page).split("/")[2]!;
-}
 
 const row = (page: Page, name: string) => page.locator("[data-document-row]").filter({ has: page.getByRole("link", { name, exact: true }) });
 
@@ -34,7 +25,7 @@ describe("documents table", () => {
 
   test("create from a template, search, rename, duplicate, archive with undo; reviewers read only", async () => {
     const page = editor.page;
-    const workspaceId = await signIn(page, email("editor"));
+    const workspaceId = await signInDemo(page, email("editor"));
     const stamp = Date.now().toString(36);
     const name = `Hub shuttle ${stamp}`;
 
@@ -108,7 +99,7 @@ describe("documents table", () => {
 
     // Reviewer: the list, no create/rename/duplicate/archive.
     const rp = reviewer.page;
-    await signIn(rp, email("reviewer"));
+    await signInDemo(rp, email("reviewer"));
     await gotoApp(rp, `/w/${workspaceId}/documents`);
     await row(rp, renamed).waitFor();
     expect(await rp.getByRole("button", { name: "New document" }).count()).toBe(0);

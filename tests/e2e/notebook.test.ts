@@ -8,18 +8,10 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { appUrl, openPerson, screenshot, type Person } from "./support/browser";
 import { ConsoleWatch } from "./support/console-watch";
-import { gotoApp } from "./support/flows";
-import { DEMO_PASSWORD, DEMO_USERS } from "../../scripts/seed/foundation";
+import { gotoApp, signInDemo } from "./support/flows";
+import { DEMO_USERS } from "../../scripts/seed/foundation";
 
 const email = (role: string) => DEMO_USERS.find((u) => u.role === role)!.email;
-
-async function signIn(page: Page, who: string): Promise<void> {
-  await gotoApp(page, "/sign-in");
-  await page.getByLabel("E-mail", { exact: true }).fill(who);
-  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(/\/w\//);
-}
 
 /** The demo workspace id, and a fresh parallel-hybrid document in it created through the API. */
 async function createDocument(page: Page, name: string): Promise<{ workspaceId: string; documentId: string }> {
@@ -79,9 +71,9 @@ describe("notebook: two people in one document", () => {
   });
 
   test("an edit by one editor reaches the other with recalculated figures; a reviewer cannot type", async () => {
-    await signIn(a.page, email("editor"));
-    await signIn(b.page, email("owner"));
-    await signIn(reviewer.page, email("reviewer"));
+    await signInDemo(a.page, email("editor"));
+    await signInDemo(b.page, email("owner"));
+    await signInDemo(reviewer.page, email("reviewer"));
     const { workspaceId, documentId } = await createDocument(a.page, `Van co-edit ${Date.now().toString(36)}`);
     const path = `/w/${workspaceId}/documents/${documentId}`;
     await Promise.all([openDocument(a.page, path), openDocument(b.page, path), openDocument(reviewer.page, path)]);
@@ -220,7 +212,7 @@ describe("notebook: the session ends while a document is open", () => {
 
   test("signed out elsewhere: the next connection is refused, the notebook says so and stops retrying", async () => {
     const page = p.page;
-    await signIn(page, email("editor"));
+    await signInDemo(page, email("editor"));
     const { workspaceId, documentId } = await createDocument(page, `Session end ${Date.now().toString(36)}`);
     await openDocument(page, `/w/${workspaceId}/documents/${documentId}`);
     // Signed out from another tab of the same browser (same cookie jar).

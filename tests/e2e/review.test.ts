@@ -7,19 +7,11 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Page } from "playwright-core";
 import { appUrl, openPerson, screenshot, type Person } from "./support/browser";
 import { ConsoleWatch } from "./support/console-watch";
-import { gotoApp } from "./support/flows";
+import { gotoApp, signInDemo } from "./support/flows";
 import { linkFromOutbox } from "./support/outbox";
-import { DEMO_PASSWORD, DEMO_USERS } from "../../scripts/seed/foundation";
+import { DEMO_USERS } from "../../scripts/seed/foundation";
 
 const user = (role: string) => DEMO_USERS.find((u) => u.role === role)!;
-
-async function signIn(page: Page, email: string): Promise<void> {
-  await gotoApp(page, "/sign-in");
-  await page.getByLabel("E-mail", { exact: true }).fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL(/\/w\//);
-}
 
 async function createVan(page: Page, name: string): Promise<{ workspaceId: string; documentId: string }> {
   const me = await page.request.get(appUrl("/api/me"));
@@ -56,7 +48,7 @@ describe("design review: versions, diff, comments, verdicts, e-mail", () => {
 
   test("editor saves v1 and v2 and asks for a review; reviewer comments on the rolling-resistance row and requests changes; editor finds both", async () => {
     const ed = editor.page;
-    await signIn(ed, user("editor").email);
+    await signInDemo(ed, user("editor").email);
     const { workspaceId, documentId } = await createVan(ed, `Van review ${Date.now().toString(36)}`);
     const path = `/w/${workspaceId}/documents/${documentId}`;
 
@@ -90,7 +82,7 @@ describe("design review: versions, diff, comments, verdicts, e-mail", () => {
 
     // The reviewer follows the link in the e-mail to the comparison v1 → v2.
     const rv = reviewer.page;
-    await signIn(rv, user("reviewer").email);
+    await signInDemo(rv, user("reviewer").email);
     const link = await linkFromOutbox(rv, user("reviewer").email, `/documents/${documentId}/diff?`);
     await rv.goto(link, { waitUntil: "networkidle" });
     await rv.locator("[data-diff]").waitFor();

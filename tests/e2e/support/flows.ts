@@ -1,5 +1,6 @@
 import type { Page } from "playwright-core";
 import { appUrl } from "./browser";
+import { DEMO_PASSWORD } from "../../../scripts/seed/foundation";
 
 export type Account = { name: string; email: string; password: string };
 
@@ -23,4 +24,14 @@ export async function gotoApp(page: Page, path: string): Promise<void> {
 /** The path part of the current URL. */
 export function pathOf(page: Page): string {
   return new URL(page.url()).pathname;
+}
+
+/** Signs a seeded demo user in; resolves with the id of the workspace the app lands on. */
+export async function signInDemo(page: Page, email: string): Promise<string> {
+  await gotoApp(page, "/sign-in");
+  await page.getByLabel("E-mail", { exact: true }).fill(email);
+  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(/\/w\//);
+  return pathOf(page).split("/")[2]!;
 }
