@@ -10,6 +10,14 @@ import { CHART_CONFIG, ELECTRIC, FUEL, GROUP_DOMAIN, GROUP_RANGE, GROUP_TITLES, 
  */
 export const FIT_X = { type: "fit-x", contains: "padding", resize: true } as const;
 
+/** What every chart of ours shares: schema, theme, container width with the fit above. */
+export const CHART_FRAME = {
+  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
+  config: CHART_CONFIG,
+  autosize: FIT_X,
+  width: "container",
+} as const;
+
 const groupColor = {
   field: "group", type: "nominal", title: null,
   scale: { domain: GROUP_DOMAIN, range: GROUP_RANGE },
@@ -18,10 +26,7 @@ const groupColor = {
 
 /** Loss ledger: one horizontal bar per sink, kWh, coloured by path. */
 export const LEDGER_BAR_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: { step: 18 },
   data: { name: "ledger" },
   transform: [{ filter: "datum.side === 'sink'" }],
@@ -39,10 +44,7 @@ export const LEDGER_BAR_SPEC = {
  * labelled segment. Equal heights are the ledger closing; colours follow the energy path.
  */
 export const ENERGY_FLOW_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: 320,
   data: { name: "flow" },
   transform: [
@@ -103,10 +105,7 @@ export type TracePanelKind = "speed" | "power" | "soc" | "gear";
 export function tracePanelSpec(kind: TracePanelKind, timeLabels: boolean): VisualizationSpec {
   const gear = kind === "gear";
   return {
-    $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-    config: CHART_CONFIG,
-    autosize: FIT_X,
-    width: "container",
+    ...CHART_FRAME,
     height: 90,
     data: { name: "rows" },
     mark: { type: "line", strokeWidth: 1.2, interpolate: gear ? "step-after" : "linear" },
@@ -124,10 +123,7 @@ export function tracePanelSpec(kind: TracePanelKind, timeLabels: boolean): Visua
 
 /** Engine operating points (engine on) under the full-load curve. */
 export const OPERATING_POINTS_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: 280,
   encoding: {
     // from idle to the top of the curve, not from 0 rpm, where an engine never runs

@@ -10,6 +10,7 @@ export const LOSS = "#8a3a5c";
 export const ROAD = "#5d6b3a";
 export const AUX = "#8a6200";
 export const UNMET = "#a5281b";
+export const OK = "#2e6b45";
 
 export const GROUP_DOMAIN = ["fuel", "electric", "road", "loss", "aux", "unmet"];
 export const GROUP_RANGE = [FUEL, ELECTRIC, ROAD, LOSS, AUX, UNMET];

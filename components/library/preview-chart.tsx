@@ -3,13 +3,12 @@
 import { useMemo } from "react";
 import type { VisualizationSpec } from "vega-embed";
 import { Chart } from "@/components/charts/chart";
-import { CHART_CONFIG, ELECTRIC, FUEL, INK } from "@/components/charts/theme";
-import { FIT_X, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
+import { ELECTRIC, FUEL, INK } from "@/components/charts/theme";
+import { CHART_FRAME, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
 import type { LibraryData } from "@/lib/library/preview";
 
 const spec = (x: string, y: string, xTitle: string, yTitle: string, color: string, points: boolean): VisualizationSpec => ({
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG, autosize: FIT_X, width: "container", height: 200, data: { name: "rows" },
+  ...CHART_FRAME, height: 200, data: { name: "rows" },
   mark: { type: "line", color, strokeWidth: 1.2, point: points ? { filled: true, size: 20, color } : false },
   encoding: {
     // a cycle's time axis like every chart over time: the data's extent, plain-comma thousands

@@ -1,15 +1,12 @@
 // Vega-lite specs of the strategy comparison: fuel per strategy (as burnt and SOC-corrected)
 // and the SOC traces. Colours: fuel hue for burnt fuel, electric hue for the corrected share.
 import type { VisualizationSpec } from "vega-embed";
-import { CHART_CONFIG, ELECTRIC, FUEL } from "@/components/charts/theme";
-import { FIT_X, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
+import { ELECTRIC, FUEL } from "@/components/charts/theme";
+import { CHART_FRAME, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
 import { SOC_COLORS } from "./rows";
 
 export const FUEL_BARS_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: { step: 18 },
   data: { name: "fuel" },
   mark: { type: "bar", cornerRadiusEnd: 2 },
@@ -23,10 +20,7 @@ export const FUEL_BARS_SPEC = {
 } as unknown as VisualizationSpec;
 
 export const SOC_TRACES_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: 180,
   data: { name: "soc" },
   mark: { type: "line", strokeWidth: 1.5 },

@@ -1,16 +1,11 @@
 // Vega-lite specs of the diff page: the A → B waterfall of energy use and overlaid traces.
 // Constants, fed through named datasets; ours in design.
 import type { VisualizationSpec } from "vega-embed";
-import { CHART_CONFIG, ELECTRIC, FUEL, INK, LOSS } from "@/components/charts/theme";
-import { FIT_X, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
-
-const OK = "#2e6b45";
+import { ELECTRIC, FUEL, INK, LOSS, OK } from "@/components/charts/theme";
+import { CHART_FRAME, TIME_AXIS, TIME_SCALE } from "@/components/charts/specs";
 
 export const WATERFALL_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: 260,
   data: { name: "steps" },
   encoding: {
@@ -34,10 +29,7 @@ export const WATERFALL_SPEC = {
 } as VisualizationSpec;
 
 export const OVERLAY_SPEC = {
-  $schema: "https://vega.github.io/schema/vega-lite/v6.json",
-  config: CHART_CONFIG,
-  autosize: FIT_X,
-  width: "container",
+  ...CHART_FRAME,
   height: 200,
   data: { name: "points" },
   mark: { type: "line", strokeWidth: 1.4, interpolate: "step-after" },
