@@ -1,26 +1,15 @@
 // Mail end to end through the real sink process: nodemailer → SMTP → server/mail-sink.ts →
 // mailparser → outbox_messages, read back from the database and through GET /api/dev/outbox.
 import { spawn, type ChildProcess } from "node:child_process";
-import { createServer } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import * as outboxRoute from "@/app/api/dev/outbox/route";
 import { listOutboxMessages } from "@/db/outbox";
 import { sendMail } from "@/lib/mail/send";
 import { invitationMail } from "@/lib/mail/templates";
 import { bodyOf, call } from "./support/http";
+import { freePort } from "./support/ports";
 
 let sink: ChildProcess | undefined;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => resolve(port));
-    });
-  });
-}
 
 beforeAll(async () => {
   const port = await freePort();

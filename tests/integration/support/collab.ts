@@ -96,15 +96,4 @@ export function tryUpgrade(args: { url: string; cookie?: string | null; origin?:
   });
 }
 
-/** A free loopback port (listen on 0, read it, close). */
-export async function freePort(): Promise<number> {
-  const { createServer } = await import("node:net");
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => resolve(port));
-    });
-  });
-}
+export { freePort } from "./ports";
